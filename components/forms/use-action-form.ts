@@ -1,0 +1,41 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { startTransition, useActionState } from 'react';
+import { useForm, type DefaultValues, type FieldValues, type Path } from 'react-hook-form';
+import type { z } from 'zod';
+import { idle, type ActionState } from '@/lib/actions/state';
+
+type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
+
+/**
+ * react-hook-form checks the shared zod schema as the user types; the server action checks it again and its
+ * field errors show in the same place. Without JavaScript the form still posts to the action.
+ */
+export function useActionForm<TValues extends FieldValues>(
+  schema: z.ZodType<unknown, TValues>,
+  action: Action,
+  defaultValues: DefaultValues<TValues>,
+) {
+  const [state, formAction, pending] = useActionState(action, idle);
+  const form = useForm<TValues>({
+    // The resolver's generics cannot see that the schema's input type is TValues.
+    resolver: zodResolver(schema as never) as never,
+    mode: 'onTouched',
+    defaultValues,
+  });
+
+  const onSubmit = form.handleSubmit((_values, event) => {
+    const element = (event?.target as HTMLFormElement | undefined) ?? null;
+    if (!element) return;
+    const data = new FormData(element);
+    startTransition(() => formAction(data));
+  });
+
+  const errorFor = (name: Path<TValues>): string | undefined => {
+    const client = form.formState.errors[name]?.message;
+    return typeof client === 'string' ? client : state.errors?.[name];
+  };
+
+  return { form, state, pending, formAction, onSubmit, errorFor };
+}

@@ -1,0 +1,25 @@
+'use client';
+
+import { organisationSettingsAction } from '@/lib/actions/members';
+import { organisationSettingsSchema, type OrganisationSettingsInput } from '@/lib/validation/organisation';
+import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields';
+import { useActionForm } from '@/components/forms/use-action-form';
+
+export function OrganisationSettingsForm({ name }: { name: string }) {
+  const { form, state, pending, formAction, onSubmit, errorFor } = useActionForm<OrganisationSettingsInput>(
+    organisationSettingsSchema,
+    organisationSettingsAction,
+    { name },
+  );
+  return (
+    <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Organisation settings">
+      <TextField label="Organisation name" error={errorFor('name')} {...form.register('name')} />
+      <FormMessage ok={state.ok} message={state.message} />
+      <div>
+        <SubmitButton pending={pending} tone="quiet">
+          Rename
+        </SubmitButton>
+      </div>
+    </form>
+  );
+}

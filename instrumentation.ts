@@ -1,0 +1,7 @@
+// Runs once when the server starts: a missing or short session secret stops it before any request is served.
+export async function register() {
+  if (process.env.NEXT_RUNTIME === 'nodejs') {
+    const { sessionSecret } = await import('./lib/auth/config');
+    sessionSecret();
+  }
+}

@@ -1,0 +1,30 @@
+'use server';
+
+import { revalidatePath } from 'next/cache';
+import { findUserById, updatePasswordHash, updateProfile } from '@/db/users';
+import { hashPassword, requireRole, verifyPassword } from '@/lib/auth';
+import { formToObject, toFieldErrors } from '@/lib/validation/issues';
+import { passwordChangeSchema, profileSchema } from '@/lib/validation/user';
+import type { ActionState } from './state';
+
+export async function updateProfileAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const me = await requireRole('any');
+  const parsed = profileSchema.safeParse(formToObject(form));
+  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
+  await updateProfile(me.userId, me.organisationId, parsed.data);
+  revalidatePath('/', 'layout');
+  return { ok: true, message: 'Profile saved.' };
+}
+
+export async function changePasswordAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const me = await requireRole('any');
+  const parsed = passwordChangeSchema.safeParse(formToObject(form));
+  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
+  const user = await findUserById(me.userId);
+  if (!user || !(await verifyPassword(parsed.data.currentPassword, user.password_hash))) {
+    return { errors: { currentPassword: 'The current password is not right.' } };
+  }
+  await updatePasswordHash(me.userId, me.organisationId, await hashPassword(parsed.data.newPassword));
+  revalidatePath('/', 'layout');
+  return { ok: true, message: 'Password changed.' };
+}

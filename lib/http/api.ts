@@ -1,0 +1,56 @@
+import { z } from 'zod';
+import { AuthError, requireRole, type RoleSet } from '@/lib/auth';
+import type { Member } from '@/db/types';
+import { ConflictError, NotFoundError } from '@/lib/errors';
+import { toFieldIssues, type FieldIssue } from '@/lib/validation/issues';
+
+export function jsonError(status: number, errors: FieldIssue[] | string): Response {
+  const body = typeof errors === 'string' ? { error: errors } : { errors };
+  return Response.json(body, { status });
+}
+
+class BodyError extends Error {
+  constructor(public readonly issue: FieldIssue) {
+    super(issue.message);
+  }
+}
+
+/** Reads a JSON object body and validates it; anything else answers 400 with the field at fault. */
+export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
+  let body: unknown;
+  try {
+    body = await request.json();
+  } catch {
+    throw new BodyError({ path: '(body)', message: 'The body must be JSON.' });
+  }
+  if (typeof body !== 'object' || body === null || Array.isArray(body)) {
+    throw new BodyError({ path: '(body)', message: 'The body must be a JSON object.' });
+  }
+  return schema.parse(body);
+}
+
+type Handler<P> = (request: Request, context: { member: Member; params: P }) => Promise<Response>;
+
+/**
+ * Every route handler goes through here: the role check comes first, then the handler; known errors map to
+ * their statuses (401/403 auth, 400 validation with field paths, 404, 409/422 conflicts).
+ */
+export function apiRoute<P = Record<string, never>>(roles: RoleSet, handler: Handler<P>) {
+  return async (request: Request, context: { params: Promise<P> }): Promise<Response> => {
+    try {
+      const member = await requireRole(roles, 'throw');
+      return await handler(request, { member, params: await context.params });
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+export function errorResponse(error: unknown): Response {
+  if (error instanceof AuthError) return jsonError(error.status, error.message);
+  if (error instanceof BodyError) return jsonError(400, [error.issue]);
+  if (error instanceof z.ZodError) return jsonError(400, toFieldIssues(error));
+  if (error instanceof NotFoundError) return jsonError(404, error.message);
+  if (error instanceof ConflictError) return jsonError(error.status, [{ path: error.field, message: error.message }]);
+  throw error;
+}

@@ -1,0 +1,19 @@
+import { z } from 'zod';
+import { ROLES } from '@/db/types';
+import { userFields } from './user';
+
+const role = z.enum(ROLES, { error: 'Role must be admin, engineer, reviewer or viewer.' });
+const userId = z.uuid('Member id must be a UUID.');
+
+export const inviteMemberSchema = z.object({
+  displayName: userFields.displayName,
+  email: userFields.email,
+  role,
+});
+export type InviteMemberInput = z.infer<typeof inviteMemberSchema>;
+
+export const changeRoleSchema = z.object({ userId, role });
+export type ChangeRoleInput = z.infer<typeof changeRoleSchema>;
+
+export const removeMemberSchema = z.object({ userId });
+export type RemoveMemberInput = z.infer<typeof removeMemberSchema>;

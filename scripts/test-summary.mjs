@@ -1,0 +1,32 @@
+// Sums vitest's and Playwright's JSON reports into the one closing line the test command promises.
+import { existsSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+
+const dir = process.argv[2];
+let passed = 0;
+let failed = 0;
+let skipped = 0;
+
+const vitestFile = join(dir, 'vitest.json');
+if (existsSync(vitestFile)) {
+  const v = JSON.parse(readFileSync(vitestFile, 'utf8'));
+  passed += v.numPassedTests;
+  failed += v.numFailedTests + (v.numFailedTestSuites ?? 0);
+  skipped += v.numPendingTests + (v.numTodoTests ?? 0);
+} else {
+  failed += 1;
+}
+
+const pwFile = join(dir, 'playwright.json');
+if (existsSync(pwFile)) {
+  const p = JSON.parse(readFileSync(pwFile, 'utf8'));
+  passed += p.stats.expected + (p.stats.flaky ?? 0);
+  failed += p.stats.unexpected;
+  skipped += p.stats.skipped;
+  if (p.errors?.length) failed += p.errors.length;
+} else {
+  failed += 1;
+}
+
+console.log(`${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`);
+process.exit(failed > 0 ? 1 : 0);
