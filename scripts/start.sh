@@ -26,7 +26,7 @@ else
   ensure_database plumbline
 fi
 run_migrations
-node --import tsx db/seed/demo.ts
+node --import tsx db/seed/demo.ts 2>"$DATA_DIR/seed.log" || { cat "$DATA_DIR/seed.log" >&2; die "demo seed failed"; }
 log "building the app"
 node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log" >&2; die "build failed (log: .data/build.log)"; }
 
@@ -37,5 +37,6 @@ for _ in $(seq 1 60); do
   kill -0 "$APP_PID" 2>/dev/null || die "the app exited during start-up"
   sleep 0.5
 done
+cat "$DATA_DIR/seed.log" >&2
 log "Plumbline is running: http://127.0.0.1:$APP_PORT  (Ctrl-C stops the app and the database)"
 wait "$APP_PID" || true

@@ -6,6 +6,7 @@ RESULTS="$DATA_DIR/test-results"
 cleanup() { trap - INT TERM EXIT; stop_embedded_pg; }
 trap cleanup INT TERM EXIT
 
+load_env_file
 ensure_node_modules
 if [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
 SESSION_SECRET="$(node -e 'process.stdout.write(require("crypto").randomBytes(32).toString("base64url"))')"

@@ -8,6 +8,8 @@ DATA_DIR="$ROOT/.data"
 PGDATA_DIR="$DATA_DIR/pg"
 PG_PORT="${PLUMBLINE_PG_PORT:-54329}"
 PLUMBLINE_OWNS_PG=0
+# Nothing may reach the internet at run time, Next's telemetry included.
+export NEXT_TELEMETRY_DISABLED=1
 
 log() { printf '\033[1;34m[plumbline]\033[0m %s\n' "$*" >&2; }
 die() { printf '\033[1;31m[plumbline]\033[0m %s\n' "$*" >&2; exit 1; }

@@ -1,0 +1,36 @@
+import { defineConfig } from '@playwright/test';
+
+const PORT = Number(process.env.PLUMBLINE_E2E_PORT ?? 3100);
+
+// Debian's Chromium, never a downloaded browser; the flags keep it quiet on a closed network.
+export default defineConfig({
+  testDir: 'tests/e2e',
+  outputDir: 'tests/.artifacts/playwright',
+  fullyParallel: false,
+  workers: 1,
+  retries: 0,
+  timeout: 60_000,
+  use: {
+    baseURL: `http://127.0.0.1:${PORT}`,
+    trace: 'retain-on-failure',
+    launchOptions: {
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
+    },
+  },
+  webServer: {
+    command: `node_modules/.bin/next start -H 127.0.0.1 -p ${PORT}`,
+    url: `http://127.0.0.1:${PORT}/api/health`,
+    reuseExistingServer: false,
+    timeout: 120_000,
+    env: { NODE_ENV: 'production' },
+  },
+});
