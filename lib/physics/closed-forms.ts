@@ -1,0 +1,240 @@
+import { bracketedRoot, lambertW0 } from './roots';
+
+/**
+ * Closed-form falls of one body in one uniform medium. The equation of motion, per unit of
+ * the inertial mass M = m + m_a, is dv/dt = −G·ŷ − (β + κ·|u|)·u with u = v − (w, 0),
+ * G = (m − ρ·V)·g / M, β = b / M and κ = c / M. These are the independent reference the
+ * integrator is verified against, so they share no code with it.
+ */
+export interface ClosedFormParams {
+  /** Height above the impact surface, m (≥ 0). */
+  readonly height_m: number;
+  readonly vx0: number;
+  readonly vy0: number;
+  /** Effective gravity G, m/s² (> 0). */
+  readonly gravity: number;
+  /** β, 1/s. */
+  readonly linear_per_s: number;
+  /** κ, 1/m. */
+  readonly quadratic_per_m: number;
+  /** Horizontal flow of the medium, m/s. */
+  readonly flow_m_s: number;
+}
+
+export interface ClosedFormFall {
+  readonly fall_time_s: number;
+  readonly impact_velocity_m_s: readonly [number, number];
+  readonly impact_speed_m_s: number;
+  readonly drift_m: number;
+  readonly apex_height_m: number | null;
+  readonly method: 'vacuum' | 'linear' | 'quadratic' | 'linear_quadratic';
+}
+
+/**
+ * The closed form for a case, or null where none applies: quadratic drag couples the
+ * horizontal and vertical motion, so with a horizontal release speed or a cross flow only
+ * vacuum and linear drag have one.
+ */
+export function closedFormFall(p: ClosedFormParams): ClosedFormFall | null {
+  const { linear_per_s: beta, quadratic_per_m: kappa } = p;
+  if (beta === 0 && kappa === 0) return vacuumFall(p.height_m, p.vx0, p.vy0, p.gravity);
+  if (kappa === 0) return linearFall(p);
+  if (p.vx0 !== 0 || p.flow_m_s !== 0) return null;
+  if (beta === 0) return quadraticFall(p.height_m, p.vy0, p.gravity, kappa);
+  return linearQuadraticFall(p.height_m, p.vy0, p.gravity, beta, kappa);
+}
+
+export function vacuumFall(h: number, vx0: number, vy0: number, g: number): ClosedFormFall {
+  const root = Math.sqrt(vy0 * vy0 + 2 * g * h);
+  // The second form avoids cancellation for a fast downward throw.
+  const t = vy0 >= 0 ? (vy0 + root) / g : (2 * h) / (root - vy0);
+  return {
+    fall_time_s: t,
+    impact_velocity_m_s: [vx0, -root],
+    impact_speed_m_s: Math.hypot(vx0, root),
+    drift_m: vx0 * t,
+    apex_height_m: vy0 > 0 ? h + (vy0 * vy0) / (2 * g) : null,
+    method: 'vacuum',
+  };
+}
+
+/** (1 − e^(−s)) / s, accurate near s = 0. */
+function phi1(s: number): number {
+  if (Math.abs(s) < 1e-4) return 1 - s / 2 + (s * s) / 6 - (s * s * s) / 24;
+  return -Math.expm1(-s) / s;
+}
+
+/** (s − 1 + e^(−s)) / s², accurate near s = 0. */
+function phi2(s: number): number {
+  if (Math.abs(s) < 1e-3) return 0.5 - s / 6 + (s * s) / 24 - (s * s * s) / 120 + (s * s * s * s) / 720;
+  return (s + Math.expm1(-s)) / (s * s);
+}
+
+/**
+ * Linear drag: y(t) = h + v₀·t·φ₁(βt) − G·t²·φ₂(βt). The fall time is
+ * t = [C + W₀(−D·e^(−C))] / β with v_t = G/β, C = β·(h + (v₀ + v_t)/β)/v_t, D = (v₀ + v_t)/v_t;
+ * that form loses digits when βt is small, so two Newton steps on the φ form polish it.
+ */
+export function linearFall(p: ClosedFormParams): ClosedFormFall {
+  const { height_m: h, vx0, vy0, gravity: G, linear_per_s: beta, flow_m_s: w } = p;
+  const vt = G / beta;
+  const y = (t: number) => h + vy0 * t * phi1(beta * t) - G * t * t * phi2(beta * t);
+  const vy = (t: number) => vy0 * Math.exp(-beta * t) - G * t * phi1(beta * t);
+  let t: number;
+  if (h === 0 && vy0 <= 0) {
+    t = 0;
+  } else {
+    const D = (vy0 + vt) / vt;
+    const C = (beta * h) / vt + D;
+    const arg = -D * Math.exp(-C);
+    t = Number.isFinite(arg) ? (C + lambertW0(Math.max(arg, -1 / Math.E))) / beta : Number.NaN;
+    if (!(t > 0) || !Number.isFinite(t)) t = vacuumFall(h, 0, vy0, G).fall_time_s;
+    for (let i = 0; i < 3; i++) {
+      const step = y(t) / vy(t);
+      t -= step;
+      if (Math.abs(step) <= 1e-15 * t) break;
+    }
+  }
+  const vyImpact = vy(t);
+  const vxImpact = w + (vx0 - w) * Math.exp(-beta * t);
+  const tApex = vy0 > 0 ? Math.log1p(vy0 / vt) / beta : null;
+  return {
+    fall_time_s: t,
+    impact_velocity_m_s: [vxImpact, vyImpact],
+    impact_speed_m_s: Math.hypot(vxImpact, vyImpact),
+    drift_m: w * t + (vx0 - w) * t * phi1(beta * t),
+    apex_height_m: tApex === null ? null : y(tApex),
+    method: 'linear',
+  };
+}
+
+/** arcosh(e^L) for L ≥ 0 without overflow or cancellation. */
+function arcoshExp(L: number): number {
+  return L + Math.log1p(Math.sqrt(-Math.expm1(-2 * L)));
+}
+
+/** ln cosh(x) without overflow. */
+function logCosh(x: number): number {
+  const a = Math.abs(x);
+  return a + Math.log1p(Math.exp(-2 * a)) - Math.LN2;
+}
+
+/**
+ * Quadratic drag, vertical. From rest: v = v_t·tanh(G·t/v_t), y = h − (v_t²/G)·ln cosh(G·t/v_t),
+ * t(h) = (v_t/G)·arcosh(exp(G·h/v_t²)). A downward throw shifts the phase (coth above v_t);
+ * an upward throw first rises (v_t²/2G)·ln(1 + v₀²/v_t²) in (v_t/G)·atan(v₀/v_t).
+ */
+export function quadraticFall(h: number, vy0: number, G: number, kappa: number): ClosedFormFall {
+  const vt = Math.sqrt(G / kappa);
+  const T = vt / G;
+  const Lg = (vt * vt) / G;
+  let t: number;
+  let speed: number;
+  let apex: number | null = null;
+  if (vy0 > 0) {
+    const rise = 0.5 * Lg * Math.log1p((vy0 / vt) ** 2);
+    apex = h + rise;
+    const tDown = T * arcoshExp((h + rise) / Lg);
+    t = T * Math.atan(vy0 / vt) + tDown;
+    speed = vt * Math.tanh(tDown / T);
+  } else {
+    const s0 = -vy0;
+    if (s0 < vt) {
+      const phase = Math.atanh(s0 / vt);
+      t = T * (arcoshExp(logCosh(phase) + h / Lg) - phase);
+    } else if (s0 > vt) {
+      const phase = Math.atanh(vt / s0);
+      t = T * (Math.asinh(Math.sinh(phase) * Math.exp(h / Lg)) - phase);
+    } else {
+      t = h / vt;
+    }
+    // v² relaxes to v_t² exponentially with the distance fallen: v² = v_t² + (v₀² − v_t²)·e^(−2h/L).
+    speed = Math.sqrt(vt * vt + (s0 * s0 - vt * vt) * Math.exp(-2 * h / Lg));
+  }
+  return {
+    fall_time_s: t,
+    impact_velocity_m_s: [0, -speed],
+    impact_speed_m_s: speed,
+    drift_m: 0,
+    apex_height_m: apex,
+    method: 'quadratic',
+  };
+}
+
+/**
+ * Linear plus quadratic drag, vertical. Falling at speed s, ds/dt = G − β·s − κ·s²: the
+ * Riccati solution is s = −β/2κ + (q/2κ)·tanh(q·t/2 + φ₀) with q = √(β² + 4κG). It is evaluated
+ * in the equivalent Bernoulli form δ = s − s_t = δ₀·e^(−qt) / (1 + (κδ₀/q)(1 − e^(−qt))), whose
+ * distance s_t·t + ln(1 + (κδ₀/q)(1 − e^(−qt)))/κ stays exact as κ → 0; t(h) is a root solve.
+ */
+export function linearQuadraticFall(h: number, vy0: number, G: number, beta: number, kappa: number): ClosedFormFall {
+  let apex: number | null = null;
+  let tUp = 0;
+  let drop = h;
+  let s0 = -vy0;
+  if (vy0 > 0) {
+    const rise = ascent(vy0, G, beta, kappa);
+    tUp = rise.time;
+    apex = h + rise.height;
+    drop = apex;
+    s0 = 0;
+  }
+  const q = Math.sqrt(beta * beta + 4 * kappa * G);
+  const st = (2 * G) / (beta + q);
+  const d0 = s0 - st;
+  const a = (kappa * d0) / q;
+  const distance = (t: number) => st * t + relaxedDistance(a, kappa, d0, q, t);
+  const speed = (t: number) => {
+    const e = Math.exp(-q * t);
+    return st + (d0 * e) / (1 - a * Math.expm1(-q * t));
+  };
+  let t = 0;
+  if (drop > 0) {
+    const tHi = d0 < 0 ? (drop - relaxedDistance(a, kappa, d0, q, Infinity)) / st : drop / st;
+    t = bracketedRoot((x) => distance(x) - drop, 0, tHi * (1 + 1e-12), { df: speed, fTol: 1e-14 * drop });
+  }
+  const s = speed(t);
+  return {
+    fall_time_s: tUp + t,
+    impact_velocity_m_s: [0, -s],
+    impact_speed_m_s: s,
+    drift_m: 0,
+    apex_height_m: apex,
+    method: 'linear_quadratic',
+  };
+}
+
+/** ∫₀ᵗ δ dt for the Bernoulli relaxation; the κ → 0 limit is δ₀·(1 − e^(−qt))/q. */
+function relaxedDistance(a: number, kappa: number, d0: number, q: number, t: number): number {
+  const x = -Math.expm1(-q * t);
+  if (Math.abs(a * x) < 1e-8) return (d0 * x * (1 - (a * x) / 2 + (a * x * a * x) / 3)) / q;
+  return Math.log1p(a * x) / kappa;
+}
+
+/**
+ * Rise of an upward throw under G + β·v + κ·v² (v upward): time to the apex and height gained.
+ * With Δ = β² − 4κG the integrals are logarithmic (Δ > 0, written in the same Bernoulli form as
+ * the descent) or arctangent (Δ < 0).
+ */
+function ascent(v0: number, G: number, beta: number, kappa: number): { time: number; height: number } {
+  const disc = beta * beta - 4 * kappa * G;
+  if (disc > 1e-12 * beta * beta) {
+    const p = Math.sqrt(disc);
+    // v + r with r = 2G/(β + p) the magnitude of the root nearer zero.
+    const r = (2 * G) / (beta + p);
+    const d0 = v0 + r;
+    const a = (kappa * d0) / p;
+    const time = Math.log((d0 + r * a) / (r * (1 + a))) / p;
+    return { time, height: -r * time + relaxedDistance(a, kappa, d0, p, time) };
+  }
+  let time: number;
+  if (disc < -1e-12 * beta * beta) {
+    const p = Math.sqrt(-disc);
+    time = (2 / p) * Math.atan(((2 * kappa * v0) / p) / (1 + ((2 * kappa * v0 + beta) * beta) / (p * p)));
+  } else {
+    const c = beta / (2 * kappa);
+    time = (1 / kappa) * (1 / c - 1 / (v0 + c));
+  }
+  const height = Math.log1p((kappa * v0 * v0 + beta * v0) / G) / (2 * kappa) - (beta / (2 * kappa)) * time;
+  return { time, height };
+}

@@ -1,0 +1,146 @@
+import { Solver } from './odex-runtime';
+import { PhysicsInputError, requireInteger, requirePositive } from './errors';
+import { bracketedRoot } from './roots';
+
+/**
+ * odex (Hairer & Wanner's extrapolation code) with events located on its dense output.
+ * An event is a component crossing a level in a given direction; the first terminal event
+ * ends the integration and its state is captured inside the output callback, because odex
+ * hands back the state after the step that overshot it.
+ */
+export interface OdeEvent {
+  readonly component: number;
+  readonly level: number;
+  /** −1: crossing downwards (value decreasing through the level); +1 upwards. */
+  readonly direction: -1 | 1;
+  readonly terminal: boolean;
+}
+
+export interface EventHit {
+  readonly event: number;
+  readonly t: number;
+  readonly y: number[];
+}
+
+export interface IntegratorOptions {
+  /** Relative tolerance, applied to every component. */
+  readonly relativeTolerance?: number;
+  /** Absolute tolerance, one value or one per component. */
+  readonly absoluteTolerance?: number | readonly number[];
+  readonly maxSteps?: number;
+  /** Event times are refined until the bracket is this small relative to the event time. */
+  readonly eventTimeTolerance?: number;
+}
+
+export const DEFAULT_INTEGRATOR_OPTIONS = {
+  relativeTolerance: 1e-10,
+  absoluteTolerance: 1e-10,
+  maxSteps: 20000,
+  eventTimeTolerance: 1e-15,
+} as const;
+
+export interface IntegrationRequest {
+  readonly f: (t: number, y: number[]) => number[];
+  readonly t0: number;
+  readonly y0: readonly number[];
+  readonly tEnd: number;
+  readonly events: readonly OdeEvent[];
+  /** Checked after each accepted step; true ends the integration there (status 'stopped'). */
+  readonly stopWhen?: (t: number, y: readonly number[]) => boolean;
+  /** Sees every accepted step with its interpolant; used to sample plots without changing steps. */
+  readonly onStep?: (tOld: number, t: number, dense: (component: number, t: number) => number) => void;
+}
+
+export interface IntegrationResult {
+  readonly status: 'event' | 'stopped' | 'end';
+  readonly t: number;
+  readonly y: number[];
+  /** Events met, in time order, ending with the terminal one when status is 'event'. */
+  readonly hits: EventHit[];
+  readonly steps: number;
+}
+
+export class IntegrationBudgetError extends Error {
+  constructor(steps: number) {
+    super(`the integration did not finish within ${steps} steps`);
+    this.name = 'IntegrationBudgetError';
+  }
+}
+
+export function validateIntegratorOptions(options: IntegratorOptions, field = 'options'): Required<IntegratorOptions> {
+  const rtol = requirePositive(`${field}.relativeTolerance`, options.relativeTolerance ?? DEFAULT_INTEGRATOR_OPTIONS.relativeTolerance);
+  if (rtol < 1e-14 || rtol > 1e-3) throw new PhysicsInputError(`${field}.relativeTolerance`, `must be from 1e-14 to 1e-3, got ${rtol}`);
+  const atolRaw = options.absoluteTolerance ?? DEFAULT_INTEGRATOR_OPTIONS.absoluteTolerance;
+  const atol = typeof atolRaw === 'number' ? requirePositive(`${field}.absoluteTolerance`, atolRaw) : atolRaw.map((v, i) => requirePositive(`${field}.absoluteTolerance.${i}`, v));
+  return {
+    relativeTolerance: rtol,
+    absoluteTolerance: atol,
+    maxSteps: requireInteger(`${field}.maxSteps`, options.maxSteps ?? DEFAULT_INTEGRATOR_OPTIONS.maxSteps, 10, 10_000_000),
+    eventTimeTolerance: requirePositive(`${field}.eventTimeTolerance`, options.eventTimeTolerance ?? DEFAULT_INTEGRATOR_OPTIONS.eventTimeTolerance),
+  };
+}
+
+export function integrate(request: IntegrationRequest, options: Required<IntegratorOptions>): IntegrationResult {
+  const n = request.y0.length;
+  const solver = new Solver(n);
+  solver.relativeTolerance = options.relativeTolerance;
+  solver.absoluteTolerance = typeof options.absoluteTolerance === 'number' ? options.absoluteTolerance : [...options.absoluteTolerance];
+  solver.maxSteps = options.maxSteps;
+  solver.denseOutput = true;
+
+  const events = request.events;
+  const previous = request.y0.slice();
+  const hits: EventHit[] = [];
+  let status: IntegrationResult['status'] = 'end';
+  let tFinal = request.t0;
+  let yFinal = request.y0.slice();
+  let steps = 0;
+
+  const result = solver.solve(request.f, request.t0, request.y0.slice(), request.tEnd, (_nr, tOld, t, y, dense) => {
+    if (!dense) return;
+    steps++;
+    let firstTerminal: EventHit | null = null;
+    const stepHits: EventHit[] = [];
+    for (let e = 0; e < events.length; e++) {
+      const ev = events[e];
+      const before = (previous[ev.component] - ev.level) * ev.direction;
+      const after = (y[ev.component] - ev.level) * ev.direction;
+      if (!(before < 0 && after >= 0)) continue;
+      const g = (tau: number) => (dense(ev.component, tau) - ev.level) * ev.direction;
+      const tHit = bracketedRoot(g, tOld, t, { xTol: options.eventTimeTolerance * Math.max(Math.abs(t), 1e-300) });
+      const yHit = new Array<number>(n);
+      for (let i = 0; i < n; i++) yHit[i] = dense(i, tHit);
+      yHit[ev.component] = ev.level;
+      const hit: EventHit = { event: e, t: tHit, y: yHit };
+      if (ev.terminal) {
+        if (!firstTerminal || tHit < firstTerminal.t) firstTerminal = hit;
+      } else {
+        stepHits.push(hit);
+      }
+    }
+    const end = firstTerminal ? firstTerminal.t : t;
+    for (const h of stepHits.sort((a, b) => a.t - b.t)) if (h.t <= end) hits.push(h);
+    if (request.onStep) request.onStep(tOld, end, dense);
+    if (firstTerminal) {
+      hits.push(firstTerminal);
+      status = 'event';
+      tFinal = firstTerminal.t;
+      yFinal = firstTerminal.y;
+      return false;
+    }
+    for (let i = 0; i < n; i++) previous[i] = y[i];
+    if (request.stopWhen && request.stopWhen(t, y)) {
+      status = 'stopped';
+      tFinal = t;
+      yFinal = y.slice();
+      return false;
+    }
+    return true;
+  });
+  if (result.outcome === 1) throw new IntegrationBudgetError(options.maxSteps);
+  if (status === 'end') {
+    tFinal = request.tEnd;
+    yFinal = result.y;
+  }
+  return { status, t: tFinal, y: yFinal, hits, steps };
+}
