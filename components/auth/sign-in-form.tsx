@@ -7,12 +7,12 @@ import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields'
 import { useActionForm } from '@/components/forms/use-action-form';
 
 export function SignInForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor } = useActionForm<SignInInput>(signInSchema, signInAction, {
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<SignInInput>(signInSchema, signInAction, {
     email: '',
     password: '',
   });
   return (
-    <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form action={formAction} onSubmit={onSubmit} noValidate data-ready={ready || undefined} className="flex flex-col gap-4">
       <FormMessage ok={state.ok} message={state.message} />
       <TextField label="E-mail" type="email" autoComplete="username" error={errorFor('email')} {...form.register('email')} />
       <TextField

@@ -7,14 +7,14 @@ import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields'
 import { useActionForm } from '@/components/forms/use-action-form';
 
 export function SignUpForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor } = useActionForm<SignUpInput>(signUpSchema, signUpAction, {
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<SignUpInput>(signUpSchema, signUpAction, {
     organisationName: '',
     displayName: '',
     email: '',
     password: '',
   });
   return (
-    <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+    <form action={formAction} onSubmit={onSubmit} noValidate data-ready={ready || undefined} className="flex flex-col gap-4">
       <FormMessage ok={state.ok} message={state.message} />
       <TextField
         label="Organisation"

@@ -1,7 +1,7 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { startTransition, useActionState } from 'react';
+import { startTransition, useActionState, useEffect, useState } from 'react';
 import { useForm, type DefaultValues, type FieldValues, type Path } from 'react-hook-form';
 import type { z } from 'zod';
 import { idle, type ActionState } from '@/lib/actions/state';
@@ -18,6 +18,9 @@ export function useActionForm<TValues extends FieldValues>(
   defaultValues: DefaultValues<TValues>,
 ) {
   const [state, formAction, pending] = useActionState(action, idle);
+  // react-hook-form writes its defaults into the inputs when it mounts; `ready` tells tests (and styles) when typing is safe.
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
   const form = useForm<TValues>({
     // The resolver's generics cannot see that the schema's input type is TValues.
     resolver: zodResolver(schema as never) as never,
@@ -37,5 +40,5 @@ export function useActionForm<TValues extends FieldValues>(
     return typeof client === 'string' ? client : state.errors?.[name];
   };
 
-  return { form, state, pending, formAction, onSubmit, errorFor };
+  return { form, state, pending, formAction, onSubmit, errorFor, ready };
 }

@@ -8,7 +8,7 @@ import { useActionForm } from '@/components/forms/use-action-form';
 import { ROLE_OPTIONS } from './role-options';
 
 export function InviteMemberForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor } = useActionForm<InviteMemberInput>(
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<InviteMemberInput>(
     inviteMemberSchema,
     inviteMemberAction,
     { displayName: '', email: '', role: 'viewer' },
@@ -19,7 +19,7 @@ export function InviteMemberForm() {
   }, [state, reset]);
 
   return (
-    <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Invite a member">
+    <form action={formAction} onSubmit={onSubmit} noValidate data-ready={ready || undefined} className="flex flex-col gap-4" aria-label="Invite a member">
       <div className="grid gap-4 sm:grid-cols-3">
         <TextField label="Name" autoComplete="off" error={errorFor('displayName')} {...form.register('displayName')} />
         <TextField label="E-mail" type="email" autoComplete="off" error={errorFor('email')} {...form.register('email')} />

@@ -7,7 +7,7 @@ import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields'
 import { useActionForm } from '@/components/forms/use-action-form';
 
 export function PasswordForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor } = useActionForm<PasswordChangeInput>(
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<PasswordChangeInput>(
     passwordChangeSchema,
     changePasswordAction,
     { currentPassword: '', newPassword: '', confirmPassword: '' },
@@ -17,7 +17,7 @@ export function PasswordForm() {
     if (state.ok) reset();
   }, [state, reset]);
   return (
-    <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Change password">
+    <form action={formAction} onSubmit={onSubmit} noValidate data-ready={ready || undefined} className="flex flex-col gap-4" aria-label="Change password">
       <TextField
         label="Current password"
         type="password"

@@ -11,13 +11,13 @@ const UNIT_OPTIONS = [
 ] as const;
 
 export function ProfileForm({ defaults }: { defaults: ProfileInput }) {
-  const { form, state, pending, formAction, onSubmit, errorFor } = useActionForm<ProfileInput>(
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<ProfileInput>(
     profileSchema,
     updateProfileAction,
     defaults,
   );
   return (
-    <form action={formAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Profile">
+    <form action={formAction} onSubmit={onSubmit} noValidate data-ready={ready || undefined} className="flex flex-col gap-4" aria-label="Profile">
       <TextField label="Name" autoComplete="name" error={errorFor('displayName')} {...form.register('displayName')} />
       <SelectField
         label="Units"

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { screens } from './screens';
+import { formsReady, screens } from './screens';
 
 const stamp = Date.now();
 const admin = { email: `e2e-admin-${stamp}@test.example`, password: 'e2e-admin-password' };
@@ -11,6 +11,7 @@ test('sign up, sign out, sign in, invite a viewer who is refused the members pag
   await screens(page, 'sign-in');
 
   await page.getByRole('link', { name: 'Set up your organisation' }).click();
+  await formsReady(page);
   await page.getByRole('button', { name: 'Create organisation' }).click();
   await expect(page.getByText('Organisation name must be at least 2 characters.')).toBeVisible();
   await screens(page, 'sign-up-errors');
@@ -26,6 +27,7 @@ test('sign up, sign out, sign in, invite a viewer who is refused the members pag
 
   await page.getByRole('button', { name: 'Sign out' }).click();
   await expect(page).toHaveURL(/\/sign-in$/);
+  await formsReady(page);
 
   await page.getByLabel('E-mail').fill(admin.email);
   await page.getByLabel('Password').fill('wrong-password');
@@ -36,6 +38,7 @@ test('sign up, sign out, sign in, invite a viewer who is refused the members pag
   await expect(page.getByRole('heading', { name: 'Welcome, Eda Admin' })).toBeVisible();
 
   await page.getByRole('link', { name: 'Members', exact: true }).click();
+  await formsReady(page);
   const invite = page.getByRole('form', { name: 'Invite a member' });
   await invite.getByLabel('Name').fill(viewer.name);
   await invite.getByLabel('E-mail').fill(viewer.email);
@@ -47,11 +50,14 @@ test('sign up, sign out, sign in, invite a viewer who is refused the members pag
   await screens(page, 'members');
 
   await page.getByRole('button', { name: 'Sign out' }).click();
+  await expect(page).toHaveURL(/\/sign-in$/);
+  await formsReady(page);
   await page.getByLabel('E-mail').fill(viewer.email);
   await page.getByLabel('Password').fill(secret);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await expect(page).toHaveURL(/\/profile\?welcome=1$/);
   await expect(page.getByText('You signed in with a one-time password.')).toBeVisible();
+  await formsReady(page);
   await screens(page, 'profile-first-sign-in');
 
   const pw = page.getByRole('form', { name: 'Change password' });

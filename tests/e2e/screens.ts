@@ -11,3 +11,11 @@ export async function screens(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: `${DIR}/${name}-tablet.png`, fullPage: true });
   if (original) await page.setViewportSize(original);
 }
+
+/** Waits until every form on the page has hydrated, so typed text is not overwritten by the form's defaults. */
+export async function formsReady(page: Page): Promise<void> {
+  await page.waitForFunction(() => {
+    const forms = [...document.querySelectorAll('form[noValidate], form[novalidate]')];
+    return forms.length > 0 && forms.every((f) => f.hasAttribute('data-ready'));
+  });
+}
