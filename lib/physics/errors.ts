@@ -5,11 +5,14 @@
  */
 export class PhysicsInputError extends Error {
   readonly field: string;
+  /** The message without the field, for forms that show it beside the field. */
+  readonly detail: string;
 
-  constructor(field: string, message: string) {
-    super(`${field}: ${message}`);
+  constructor(field: string, detail: string) {
+    super(`${field}: ${detail}`);
     this.name = 'PhysicsInputError';
     this.field = field;
+    this.detail = detail;
   }
 }
 

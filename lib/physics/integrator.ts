@@ -45,6 +45,11 @@ export interface IntegrationRequest {
   readonly y0: readonly number[];
   readonly tEnd: number;
   readonly events: readonly OdeEvent[];
+  /**
+   * First step to try. odex starts from 1e-4 otherwise, and for a fall of a few seconds the
+   * steps spent growing from there cost more than the rest of the solve.
+   */
+  readonly initialStep?: number;
   /** Checked after each accepted step; true ends the integration there (status 'stopped'). */
   readonly stopWhen?: (t: number, y: readonly number[]) => boolean;
   /** Sees every accepted step with its interpolant; used to sample plots without changing steps. */
@@ -87,6 +92,7 @@ export function integrate(request: IntegrationRequest, options: Required<Integra
   solver.absoluteTolerance = typeof options.absoluteTolerance === 'number' ? options.absoluteTolerance : [...options.absoluteTolerance];
   solver.maxSteps = options.maxSteps;
   solver.denseOutput = true;
+  if (request.initialStep !== undefined) solver.initialStepSize = request.initialStep;
 
   const events = request.events;
   const previous = request.y0.slice();
