@@ -79,17 +79,18 @@ start_embedded_pg() {
       --encoding=UTF8 --locale=C.UTF-8 >/dev/null
     cat >> "$PGDATA_DIR/postgresql.conf" <<CONF
 listen_addresses = '127.0.0.1'
-port = $PG_PORT
 unix_socket_directories = '$PGDATA_DIR'
 max_connections = 50
 fsync = on
 CONF
   fi
   if as_postgres "$PG_BIN/pg_ctl" -D "$PGDATA_DIR" status >/dev/null 2>&1; then
+    PG_PORT="$(head -4 "$PGDATA_DIR/postmaster.pid" | tail -1)"
     log "PostgreSQL already running on 127.0.0.1:$PG_PORT"
   else
     log "starting PostgreSQL on 127.0.0.1:$PG_PORT"
-    as_postgres "$PG_BIN/pg_ctl" -D "$PGDATA_DIR" -l "$PGDATA_DIR/server.log" -w -t 60 start >/dev/null \
+    # The port goes on the command line, not into postgresql.conf, so PLUMBLINE_PG_PORT always decides it.
+    as_postgres "$PG_BIN/pg_ctl" -D "$PGDATA_DIR" -l "$PGDATA_DIR/server.log" -o "-p $PG_PORT" -w -t 60 start >/dev/null \
       || { tail -20 "$PGDATA_DIR/server.log" >&2; die "PostgreSQL did not start"; }
     PLUMBLINE_OWNS_PG=1
   fi
