@@ -76,6 +76,18 @@ export interface ResolvedCase {
   readonly samples: number;
 }
 
+/**
+ * Below a micrometre a fall is not a meaningful planning case, and the tolerances, which scale
+ * with the height, would fall below what double precision can resolve near the ground.
+ */
+export const MIN_HEIGHT_M = 1e-6;
+
+function requireHeight(field: string, value: unknown, zeroAllowed: boolean): number {
+  const h = zeroAllowed ? requireNonNegative(field, value) : requirePositive(field, value);
+  if (h !== 0 && h < MIN_HEIGHT_M) throw new PhysicsInputError(field, `must be ${zeroAllowed ? '0 or ' : ''}at least ${MIN_HEIGHT_M} m, got ${h}`);
+  return h;
+}
+
 function isObject(value: unknown): value is Record<string, unknown> {
   return value !== null && typeof value === 'object' && !Array.isArray(value);
 }
@@ -146,7 +158,7 @@ export function resolveDropCase(input: unknown): ResolvedCase {
       if (!isObject(layer)) throw new PhysicsInputError(f, 'must be an object with medium and thickness_m');
       layerSpecs.push({
         medium: layer.medium,
-        thickness: requirePositive(`${f}.thickness_m`, layer.thickness_m),
+        thickness: requireHeight(`${f}.thickness_m`, layer.thickness_m, false),
         flow: layer.flow_m_s === undefined ? 0 : requireFinite(`${f}.flow_m_s`, layer.flow_m_s),
         field: f,
       });
@@ -156,13 +168,16 @@ export function resolveDropCase(input: unknown): ResolvedCase {
     if (release.height_m === undefined) throw new PhysicsInputError('release.height_m', 'is required unless layers are given');
     layerSpecs.push({
       medium: input.medium,
-      thickness: requireNonNegative('release.height_m', release.height_m),
+      thickness: requireHeight('release.height_m', release.height_m, true),
       flow: input.wind_m_s === undefined ? 0 : requireFinite('wind_m_s', input.wind_m_s),
       field: '',
     });
   }
 
   const height = layerSpecs.reduce((sum, l) => sum + l.thickness, 0);
+  if (height === 0 && v0[1] > 0 && (v0[1] * v0[1]) / (2 * g) < MIN_HEIGHT_M) {
+    throw new PhysicsInputError('release.velocity_m_s.1', `an upward throw from zero height must rise at least ${MIN_HEIGHT_M} m; use 0 for a release at rest`);
+  }
   let top = height;
   const layers: ResolvedLayer[] = layerSpecs.map((spec, index) => {
     const mediumField = spec.field ? `${spec.field}.medium` : 'medium';

@@ -37,6 +37,9 @@ export interface ClosedFormFall {
  */
 export function closedFormFall(p: ClosedFormParams): ClosedFormFall | null {
   const { linear_per_s: beta, quadratic_per_m: kappa } = p;
+  if (p.height_m === 0 && p.vy0 <= 0) {
+    return { fall_time_s: 0, impact_velocity_m_s: [p.vx0, p.vy0], impact_speed_m_s: Math.hypot(p.vx0, p.vy0), drift_m: 0, apex_height_m: null, method: beta === 0 && kappa === 0 ? 'vacuum' : kappa === 0 ? 'linear' : beta === 0 ? 'quadratic' : 'linear_quadratic' };
+  }
   if (beta === 0 && kappa === 0) return vacuumFall(p.height_m, p.vx0, p.vy0, p.gravity);
   if (kappa === 0) return linearFall(p);
   if (p.vx0 !== 0 || p.flow_m_s !== 0) return null;
