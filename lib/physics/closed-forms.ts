@@ -116,6 +116,16 @@ function arcoshExp(L: number): number {
   return L + Math.log1p(Math.sqrt(-Math.expm1(-2 * L)));
 }
 
+/** asinh(e^L) without overflow. */
+function asinhExp(L: number): number {
+  return L < 0 ? Math.asinh(Math.exp(L)) : L + Math.log1p(Math.sqrt(1 + Math.exp(-2 * L)));
+}
+
+/** ln sinh(x) for x > 0 without overflow. */
+function logSinh(x: number): number {
+  return x < 1 ? Math.log(Math.sinh(x)) : x + Math.log1p(-Math.exp(-2 * x)) - Math.LN2;
+}
+
 /** ln cosh(x) without overflow. */
 function logCosh(x: number): number {
   const a = Math.abs(x);
@@ -147,7 +157,7 @@ export function quadraticFall(h: number, vy0: number, G: number, kappa: number):
       t = T * (arcoshExp(logCosh(phase) + h / Lg) - phase);
     } else if (s0 > vt) {
       const phase = Math.atanh(vt / s0);
-      t = T * (Math.asinh(Math.sinh(phase) * Math.exp(h / Lg)) - phase);
+      t = T * (asinhExp(logSinh(phase) + h / Lg) - phase);
     } else {
       t = h / vt;
     }

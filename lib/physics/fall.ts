@@ -32,8 +32,9 @@ export interface LayerReport {
   readonly top_m: number;
   readonly bottom_m: number;
   readonly terminal_speed_m_s: number | null;
-  readonly entry_time_s: number;
-  readonly entry_speed_m_s: number;
+  /** Null for layers below the one the object floats in. */
+  readonly entry_time_s: number | null;
+  readonly entry_speed_m_s: number | null;
   /** Null when the object does not pass through the layer (it floats in it or above it). */
   readonly exit_time_s: number | null;
 }
@@ -350,7 +351,9 @@ function terminalTail(layer: ResolvedLayer, s: number[], dtGiven?: number): { dt
 function layerReports(c: ResolvedCase, runs: LayerRun[]): LayerReport[] {
   return c.layers.map((layer, i) => {
     const run = runs[i];
-    const entry = run ? run.s0 : null;
+    // The layer after the last one run is where the object arrived and floats.
+    const arrival = !run && i === runs.length ? (runs.length > 0 ? { t: runs[i - 1].t1, s: runs[i - 1].s1 } : { t: 0, s: [0, 0, ...c.release_velocity] }) : null;
+    const entry = run ? { t: run.t0, s: run.s0 } : arrival;
     return {
       index: layer.index,
       medium: layer.medium.label,
@@ -358,8 +361,8 @@ function layerReports(c: ResolvedCase, runs: LayerRun[]): LayerReport[] {
       top_m: layer.top_m,
       bottom_m: layer.bottom_m,
       terminal_speed_m_s: Number.isFinite(layer.terminal_speed_m_s) && layer.net_weight_n > 0 ? layer.terminal_speed_m_s : null,
-      entry_time_s: run ? run.t0 : runs.length > 0 ? runs[runs.length - 1].t1 : 0,
-      entry_speed_m_s: entry ? Math.hypot(entry[2], entry[3]) : Math.hypot(c.release_velocity[0], c.release_velocity[1]),
+      entry_time_s: entry ? entry.t : null,
+      entry_speed_m_s: entry ? Math.hypot(entry.s[2], entry.s[3]) : null,
       exit_time_s: run ? run.t1 : null,
     };
   });
