@@ -4,7 +4,7 @@ import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttribu
 
 interface FieldShellProps {
   id: string;
-  label: string;
+  label: ReactNode;
   hint?: ReactNode;
   error?: string;
   children: ReactNode;
@@ -39,19 +39,47 @@ function describedBy(id: string, hint: unknown, error?: string) {
   return error ? `${id}-error` : hint ? `${id}-hint` : undefined;
 }
 
-type TextFieldProps = InputHTMLAttributes<HTMLInputElement> & { label: string; hint?: ReactNode; error?: string };
+type TextFieldProps = InputHTMLAttributes<HTMLInputElement> & {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  /** A unit printed inside the right end of the box, e.g. "m/s". */
+  suffix?: string;
+};
 
-export function TextField({ label, hint, error, className = '', ...input }: TextFieldProps) {
+export function TextField({ label, hint, error, suffix, className = '', ...input }: TextFieldProps) {
   const id = useId();
+  const box = (
+    <input
+      id={id}
+      aria-invalid={error ? true : undefined}
+      aria-describedby={describedBy(id, hint, error)}
+      className={`${control} ${error ? 'border-flare-500' : 'border-paper-rule'} ${suffix ? 'pr-16 num' : ''} ${className}`}
+      {...input}
+    />
+  );
   return (
-    <FieldShell id={id} label={label} hint={hint} error={error}>
-      <input
-        id={id}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, hint, error)}
-        className={`${control} ${error ? 'border-flare-500' : 'border-paper-rule'} ${className}`}
-        {...input}
-      />
+    <FieldShell
+      id={id}
+      label={
+        <>
+          {label}
+          {suffix ? <span className="sr-only"> ({suffix})</span> : null}
+        </>
+      }
+      hint={hint}
+      error={error}
+    >
+      {suffix ? (
+        <div className="relative">
+          {box}
+          <span aria-hidden className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-sm text-ink-muted">
+            {suffix}
+          </span>
+        </div>
+      ) : (
+        box
+      )}
     </FieldShell>
   );
 }

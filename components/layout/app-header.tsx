@@ -20,6 +20,7 @@ export function AppHeader({ member }: { member: Member }) {
         </Link>
         <nav aria-label="Main" className="flex flex-wrap gap-1">
           <NavLink href="/">Overview</NavLink>
+          <NavLink href="/calculator">Drop calculator</NavLink>
           {member.role === 'admin' ? <NavLink href="/members">Members</NavLink> : null}
           <NavLink href="/profile">Profile</NavLink>
         </nav>

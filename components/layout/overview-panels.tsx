@@ -10,6 +10,12 @@ interface Panel {
 
 const COMMON: Panel[] = [
   {
+    title: 'Drop calculator',
+    body: 'Fall time, impact speed and energy, drift in wind and the fall on through seawater for one object, checked against the closed forms.',
+    href: '/calculator',
+    cta: 'Open the calculator',
+  },
+  {
     title: 'Your profile',
     body: 'Your name, your password, and whether Plumbline shows SI or US customary units.',
     href: '/profile',

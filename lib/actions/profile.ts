@@ -28,3 +28,12 @@ export async function changePasswordAction(_prev: ActionState, form: FormData): 
   revalidatePath('/', 'layout');
   return { ok: true, message: 'Password changed.' };
 }
+
+/** The calculator's unit switch remembers the choice in the profile. */
+export async function setUnitSystemAction(unitSystem: string): Promise<ActionState> {
+  const me = await requireRole('any');
+  const parsed = profileSchema.shape.unitSystem.safeParse(unitSystem);
+  if (!parsed.success) return { errors: { unitSystem: parsed.error.issues[0].message } };
+  await updateProfile(me.userId, me.organisationId, { displayName: me.displayName, unitSystem: parsed.data });
+  return { ok: true };
+}

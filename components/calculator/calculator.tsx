@@ -1,0 +1,129 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { useEffect, useMemo, useState, useTransition } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import type { UnitSystem } from '@/db/types';
+import { setUnitSystemAction } from '@/lib/actions/profile';
+import { calculatorSchema, convertUnits, toDropCase, toSearchParams, type CalculatorValues } from '@/lib/calculator/form';
+import type { DropCase } from '@/lib/physics';
+import { formatQuantity } from '@/lib/units';
+import { DropResults } from './drop-results';
+import { SHAPE_LABELS } from './labels';
+import { ObjectSection } from './object-section';
+import { PathSection, ReleaseSection } from './path-section';
+import { UnitSwitch } from './unit-switch';
+import { useDropResult } from './use-drop-result';
+
+const PLOT_SAMPLES = 240;
+
+export function Calculator({ initial }: { initial: CalculatorValues }) {
+  const [client] = useState(() => new QueryClient());
+  return (
+    <QueryClientProvider client={client}>
+      <CalculatorBody initial={initial} />
+    </QueryClientProvider>
+  );
+}
+
+function describe(v: CalculatorValues, c: DropCase): string {
+  const height = c.layers ? c.layers.reduce((s, l) => s + l.thickness_m, 0) : (c.release?.height_m ?? 0);
+  return `${SHAPE_LABELS[v.shape].toLowerCase()}, ${formatQuantity('mass', c.object.mass_kg, v.units)}, from ${formatQuantity('length', height, v.units)}`;
+}
+
+function CalculatorBody({ initial }: { initial: CalculatorValues }) {
+  const form = useForm<CalculatorValues>({
+    resolver: zodResolver(calculatorSchema),
+    mode: 'onChange',
+    defaultValues: initial,
+  });
+  const [, startTransition] = useTransition();
+  const watched = useWatch({ control: form.control }) as CalculatorValues;
+  const values = useMemo(() => ({ ...initial, ...watched }), [initial, watched]);
+  const valuesKey = JSON.stringify(values);
+
+  // A shared link may carry bad values: show their messages at once rather than on the first keystroke.
+  useEffect(() => {
+    void form.trigger();
+  }, [form]);
+
+  useEffect(() => {
+    const query = toSearchParams(JSON.parse(valuesKey)).toString();
+    window.history.replaceState(null, '', query ? `?${query}` : window.location.pathname);
+  }, [valuesKey]);
+
+  const dropCase = useMemo(() => {
+    const v = JSON.parse(valuesKey) as CalculatorValues;
+    if (!calculatorSchema.safeParse(v).success) return null;
+    try {
+      return toDropCase(v, PLOT_SAMPLES);
+    } catch {
+      return null;
+    }
+  }, [valuesKey]);
+  const caseJson = dropCase ? JSON.stringify(dropCase) : null;
+  const query = useDropResult(caseJson);
+
+  const switchUnits = (to: UnitSystem) => {
+    form.reset(convertUnits(form.getValues(), to));
+    void form.trigger();
+    startTransition(async () => {
+      await setUnitSystemAction(to);
+    });
+  };
+
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(340px,420px)_1fr]">
+      <form noValidate aria-label="Drop case" className="flex flex-col gap-4" onSubmit={(e) => e.preventDefault()} data-ready>
+        <div className="flex items-center justify-between gap-3">
+          <span className="text-sm font-semibold text-ink-soft">Units</span>
+          <UnitSwitch value={values.units} onChange={switchUnits} />
+        </div>
+        <ObjectSection form={form} values={values} />
+        <PathSection form={form} values={values} />
+        <ReleaseSection form={form} values={values} />
+      </form>
+
+      <div className="flex min-w-0 flex-col gap-4" aria-live="polite">
+        {!dropCase ? (
+          <p role="status" className="rounded-card bg-paper-raised p-5 text-ink-soft shadow-card">
+            Fix the fields marked in the form to see results: Plumbline shows no figures for a case it cannot read.
+          </p>
+        ) : query.error ? (
+          <div role="alert" className="rounded-card border-l-4 border-flare-500 bg-flare-50 p-4 text-sm text-flare-700">
+            <p className="font-semibold">{query.error.message}</p>
+            {'issues' in query.error && Array.isArray(query.error.issues) ? (
+              <ul className="mt-1 list-disc pl-5">
+                {query.error.issues.map((i: { path: string; message: string }) => (
+                  <li key={i.path + i.message}>
+                    <span className="num">{i.path}</span>: {i.message}
+                  </li>
+                ))}
+              </ul>
+            ) : null}
+          </div>
+        ) : query.data ? (
+          <>
+            {query.settling ? (
+              <p role="status" className="text-sm text-ink-muted">
+                Computing…
+              </p>
+            ) : null}
+            <DropResults
+              result={query.data.result}
+              dropCase={query.data.dropCase}
+              units={values.units}
+              description={describe(values, query.data.dropCase)}
+              updating={query.settling}
+            />
+          </>
+        ) : (
+          <p role="status" className="rounded-card bg-paper-raised p-5 text-ink-muted shadow-card">
+            Computing…
+          </p>
+        )}
+      </div>
+    </div>
+  );
+}
