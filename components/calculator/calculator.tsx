@@ -39,6 +39,8 @@ function CalculatorBody({ initial }: { initial: CalculatorValues }) {
     defaultValues: initial,
   });
   const [, startTransition] = useTransition();
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
   const watched = useWatch({ control: form.control }) as CalculatorValues;
   const values = useMemo(() => ({ ...initial, ...watched }), [initial, watched]);
   const valuesKey = JSON.stringify(values);
@@ -75,7 +77,7 @@ function CalculatorBody({ initial }: { initial: CalculatorValues }) {
 
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(340px,420px)_1fr]">
-      <form noValidate aria-label="Drop case" className="flex flex-col gap-4" onSubmit={(e) => e.preventDefault()} data-ready>
+      <form noValidate aria-label="Drop case" className="flex flex-col gap-4" onSubmit={(e) => e.preventDefault()} data-ready={ready || undefined}>
         <div className="flex items-center justify-between gap-3">
           <span className="text-sm font-semibold text-ink-soft">Units</span>
           <UnitSwitch value={values.units} onChange={switchUnits} />

@@ -187,7 +187,9 @@ export function DropResults({ result, dropCase, units, description, updating }: 
       <div className="grid gap-3 lg:grid-cols-2">
         <SpeedPlot result={result} dropCase={dropCase} units={units} />
         <HeightPlot result={result} dropCase={dropCase} units={units} />
-        <PathPlot result={result} dropCase={dropCase} units={units} />
+        <div className="lg:col-span-2">
+          <PathPlot result={result} dropCase={dropCase} units={units} />
+        </div>
         <div className="lg:col-span-2">
           <EnergyScale result={result} dropCase={dropCase} units={units} />
         </div>

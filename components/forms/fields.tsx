@@ -54,7 +54,8 @@ export function TextField({ label, hint, error, suffix, className = '', ...input
       id={id}
       aria-invalid={error ? true : undefined}
       aria-describedby={describedBy(id, hint, error)}
-      className={`${control} ${error ? 'border-flare-500' : 'border-paper-rule'} ${suffix ? 'pr-16 num' : ''} ${className}`}
+      className={`${control} ${error ? 'border-flare-500' : 'border-paper-rule'} ${suffix ? 'num' : ''} ${className}`}
+      style={suffix ? { paddingRight: `${0.9 + suffix.length * 0.55}rem` } : undefined}
       {...input}
     />
   );
@@ -73,7 +74,7 @@ export function TextField({ label, hint, error, suffix, className = '', ...input
       {suffix ? (
         <div className="relative">
           {box}
-          <span aria-hidden className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-sm text-ink-muted">
+          <span aria-hidden className="pointer-events-none absolute inset-y-0 right-2.5 flex items-center text-sm text-ink-muted">
             {suffix}
           </span>
         </div>
