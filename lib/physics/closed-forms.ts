@@ -83,24 +83,23 @@ export function linearFall(p: ClosedFormParams): ClosedFormFall {
   const vt = G / beta;
   const y = (t: number) => h + vy0 * t * phi1(beta * t) - G * t * t * phi2(beta * t);
   const vy = (t: number) => vy0 * Math.exp(-beta * t) - G * t * phi1(beta * t);
-  let t: number;
-  if (h === 0 && vy0 <= 0) {
-    t = 0;
-  } else {
+  const tApex = vy0 > 0 ? Math.log1p(vy0 / vt) / beta : null;
+  let t = 0;
+  if (h > 0 || vy0 > 0) {
     const D = (vy0 + vt) / vt;
     const C = (beta * h) / vt + D;
     const arg = -D * Math.exp(-C);
-    t = Number.isFinite(arg) ? (C + lambertW0(Math.max(arg, -1 / Math.E))) / beta : Number.NaN;
-    if (!(t > 0) || !Number.isFinite(t)) t = vacuumFall(h, 0, vy0, G).fall_time_s;
-    for (let i = 0; i < 3; i++) {
-      const step = y(t) / vy(t);
-      t -= step;
-      if (Math.abs(step) <= 1e-15 * t) break;
-    }
+    const estimate = Number.isFinite(arg) ? (C + lambertW0(Math.max(arg, -1 / Math.E))) / beta : Number.NaN;
+    // Near the branch point of W (tiny drag, or a throw from the ground) the estimate loses
+    // digits, so it only seeds a bracket for a safeguarded Newton solve on the φ form.
+    const lo = tApex ?? 0;
+    let hi = estimate > lo && Number.isFinite(estimate) ? estimate * (1 + 1e-6) : Math.max(lo, vacuumFall(h, 0, vy0, G).fall_time_s);
+    if (!(hi > lo)) hi = lo + 1e-9 + vacuumFall(h, 0, Math.max(vy0, 0), G).fall_time_s;
+    while (y(hi) > 0) hi = lo + 2 * (hi - lo);
+    t = bracketedRoot(y, lo, hi, { df: vy, fTol: 1e-15 * Math.max(h, 1e-300) });
   }
   const vyImpact = vy(t);
   const vxImpact = w + (vx0 - w) * Math.exp(-beta * t);
-  const tApex = vy0 > 0 ? Math.log1p(vy0 / vt) / beta : null;
   return {
     fall_time_s: t,
     impact_velocity_m_s: [vxImpact, vyImpact],
@@ -126,9 +125,11 @@ function logSinh(x: number): number {
   return x < 1 ? Math.log(Math.sinh(x)) : x + Math.log1p(-Math.exp(-2 * x)) - Math.LN2;
 }
 
-/** ln cosh(x) without overflow. */
+/** ln cosh(x) without overflow or loss of digits near zero. */
 function logCosh(x: number): number {
   const a = Math.abs(x);
+  // cosh x − 1 = 2·sinh²(x/2) keeps the digits of a small argument.
+  if (a < 1) return Math.log1p(2 * Math.sinh(a / 2) ** 2);
   return a + Math.log1p(Math.exp(-2 * a)) - Math.LN2;
 }
 
@@ -162,7 +163,8 @@ export function quadraticFall(h: number, vy0: number, G: number, kappa: number):
       t = h / vt;
     }
     // v² relaxes to v_t² exponentially with the distance fallen: v² = v_t² + (v₀² − v_t²)·e^(−2h/L).
-    speed = Math.sqrt(vt * vt + (s0 * s0 - vt * vt) * Math.exp(-2 * h / Lg));
+    // Written with expm1 so a short drop (h ≪ v_t²/G) keeps its digits.
+    speed = Math.sqrt(-vt * vt * Math.expm1((-2 * h) / Lg) + s0 * s0 * Math.exp((-2 * h) / Lg));
   }
   return {
     fall_time_s: t,

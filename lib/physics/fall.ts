@@ -273,6 +273,7 @@ function runLayer(layer: ResolvedLayer, t0: number, s0: number[], trackApex: boo
   const w = layer.flow_m_s;
   const relaxTime = Math.min(Number.isFinite(vt) && vt > 0 ? vt / G : Infinity, layer.drag.linear_kg_s > 0 ? M / layer.drag.linear_kg_s : Infinity);
   const request: IntegrationRequest = {
+    timeScale: (Math.max(vy0, 0) + fallSpeed) / G,
     initialStep: 0.25 * Math.min((Math.max(vy0, 0) + fallSpeed) / G, relaxTime),
     f: rightHandSide(layer, audit),
     t0,
