@@ -8,9 +8,10 @@ import { toFieldIssues, type FieldIssue } from '@/lib/validation/issues';
  * needs an area, the ISA range, a floating object...) are the physics core's own checks, run
  * as a refinement so every rule lives in one place and reports the field it concerns.
  */
-const finite = () => z.number();
-const positive = () => z.number().positive();
-const nonNegative = () => z.number().nonnegative();
+// Messages read after the field name: "object.mass_kg: must be greater than 0".
+const finite = () => z.number({ error: 'must be a finite number' });
+const positive = () => finite().positive('must be greater than 0');
+const nonNegative = () => finite().nonnegative('must be 0 or more');
 
 const PRESET_KEYS: Record<string, readonly string[]> = {
   isa: ['altitude_m', 'temperature_offset_c'],
