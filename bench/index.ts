@@ -4,7 +4,7 @@
  */
 import { closedFormFall, simulateDrop, type DropCase } from '@/lib/physics';
 import { dp45Fall, type FastFallParams } from '@/lib/physics/rk45';
-import { dropZoneStatistics } from '@/lib/physics/sampling';
+import { dropZoneStatistics, REFERENCE_DROP_ZONE } from '@/lib/physics/sampling';
 
 function median(values: number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -36,17 +36,7 @@ const odexWindy = perCall(() => simulateDrop(windy), 500);
 const dpVertical = perCall(() => dp45Fall(fastVertical), 20_000);
 const dpWindy = perCall(() => dp45Fall(fastWindy), 20_000);
 
-const spec = {
-  cases: 10_000,
-  seed: 12345,
-  mass_kg: 2,
-  area_m2: 0.01,
-  density_kg_m3: 1.225,
-  height_m: 50,
-  cd: [0.8, 1.3] as const,
-  wind_m_s: [0, 15] as const,
-  release_speed_m_s: [0, 2] as const,
-};
+const spec = REFERENCE_DROP_ZONE;
 dropZoneStatistics(spec);
 const runs: number[] = [];
 let zone = dropZoneStatistics(spec);

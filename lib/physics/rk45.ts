@@ -1,4 +1,5 @@
 import { PhysicsInputError, PhysicsSolveError, requireInteger, requirePositive } from './errors';
+import type { ClosedFormParams } from './closed-forms';
 
 /**
  * An embedded Dormand–Prince 5(4) pair (Dormand & Prince, J. Comput. Appl. Math. 6, 1980;
@@ -8,18 +9,8 @@ import { PhysicsInputError, PhysicsSolveError, requireInteger, requirePositive }
  * drag in a uniform medium does not depend on position, only the velocity stages are formed
  * and the state is held in scalars, which is what makes it an order of magnitude faster.
  */
-export interface FastFallParams {
-  readonly height_m: number;
-  readonly vx0: number;
-  readonly vy0: number;
-  /** Effective gravity (m − ρ·V)·g / (m + m_a), m/s², > 0. */
-  readonly gravity: number;
-  /** b / (m + m_a), 1/s. */
-  readonly linear_per_s: number;
-  /** ½·ρ·C_d·A / (m + m_a), 1/m. */
-  readonly quadratic_per_m: number;
-  readonly flow_m_s: number;
-}
+/** The same reduced parameters as the closed forms: per unit inertial mass, one layer. */
+export type FastFallParams = ClosedFormParams;
 
 export interface FastFallOptions {
   readonly relativeTolerance?: number;
