@@ -3,6 +3,8 @@ import HomePage from '@/app/(app)/page';
 import MembersPage from '@/app/(app)/members/page';
 import ProfilePage from '@/app/(app)/profile/page';
 import { GET as health } from '@/app/api/health/route';
+import { POST as postDrops } from '@/app/api/v1/drops/route';
+import CalculatorPage from '@/app/(app)/calculator/page';
 import { DELETE as deleteSession, GET as getSessionRoute } from '@/app/api/v1/session/route';
 import {
   changeRoleAction,
@@ -10,7 +12,7 @@ import {
   organisationSettingsAction,
   removeMemberAction,
 } from '@/lib/actions/members';
-import { changePasswordAction, updateProfileAction } from '@/lib/actions/profile';
+import { changePasswordAction, setUnitSystemAction, updateProfileAction } from '@/lib/actions/profile';
 import { startSession } from '@/lib/auth';
 import { createOrg, ctx, jsonRequest, PASSWORD, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
 
@@ -76,6 +78,27 @@ const CASES: { name: string; run: () => Promise<Outcome>; expected: Record<Subje
   { name: 'page /', run: () => pageOutcome(() => HomePage()), expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) } },
   { name: 'page /members', run: () => pageOutcome(() => MembersPage()), expected: adminOnly() },
   { name: 'page /profile', run: () => pageOutcome(() => ProfilePage()), expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) } },
+  {
+    name: 'page /calculator',
+    run: () => pageOutcome(() => CalculatorPage({ searchParams: Promise.resolve({ mass: '12' }) })),
+    expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) },
+  },
+  {
+    name: 'POST /api/v1/drops',
+    run: () =>
+      status(
+        postDrops(
+          jsonRequest('POST', { object: { mass_kg: 5 }, drag_model: 'none', medium: { preset: 'isa' }, release: { height_m: 1 } }),
+          ctx({}),
+        ),
+      ),
+    expected: { anonymous: '401', ...everyoneSignedIn('200') },
+  },
+  {
+    name: 'action setUnitSystem',
+    run: () => outcomeOfAction(() => runAction(async () => setUnitSystemAction('us'))),
+    expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) },
+  },
   {
     name: 'action inviteMember',
     run: () => outcomeOfAction(() => runAction(inviteMemberAction, { displayName: 'New Person', email: 'new@test.example', role: 'viewer' })),

@@ -3,7 +3,7 @@ import { POST as postSession } from '@/app/api/v1/session/route';
 import { getDb } from '@/db/knex';
 import { signInAction, signUpAction } from '@/lib/actions/auth';
 import { inviteMemberAction, organisationSettingsAction } from '@/lib/actions/members';
-import { updateProfileAction } from '@/lib/actions/profile';
+import { setUnitSystemAction, updateProfileAction } from '@/lib/actions/profile';
 import { startSession } from '@/lib/auth';
 import { createOrg, jsonRequest, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
 
@@ -78,6 +78,9 @@ describe('server actions with bad fields write nothing', () => {
       state: { errors: { name: 'Organisation name must be at most 120 characters.' } },
     });
     expect(await runAction(updateProfileAction, { displayName: 'Ok', unitSystem: 'imperial' })).toMatchObject({
+      state: { errors: { unitSystem: 'Unit system must be SI or US customary.' } },
+    });
+    expect(await runAction(async () => setUnitSystemAction('imperial'))).toMatchObject({
       state: { errors: { unitSystem: 'Unit system must be SI or US customary.' } },
     });
     expect(await rowCounts()).toEqual(before);

@@ -89,6 +89,7 @@ describe('links and unit switching', () => {
   it('switches units and back within six significant figures', () => {
     const si = v({ mass: '47.1', dropHeight: '30', wind: '10' });
     const us = convertUnits(si, 'us');
+    // 30 m / 0.3048 m per ft = 98.4252 ft (1 ft = 0.3048 m exactly, NIST SP 811).
     expect(Number(us.dropHeight)).toBeCloseTo(98.4252, 4);
     const again = convertUnits(us, 'si');
     expect(Number(again.mass)).toBeCloseTo(47.1, 3);
