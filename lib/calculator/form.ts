@@ -132,7 +132,7 @@ export const RULES: Record<string, NumberRule> = {
 };
 
 function limitText(rule: NumberRule, bound: number, units: UnitSystem): string {
-  if (!rule.quantity) return `${formatNumber(bound, 4)}${rule.unitless ? ` ${rule.unitless}`.replace(' °', '°') : ''}`;
+  if (!rule.quantity) return `${formatNumber(bound, 4)}${rule.unitless ?? ''}`;
   return `${formatNumber(fromSI(rule.quantity, bound, units), 4)} ${unitLabel(rule.quantity, units)}`;
 }
 
