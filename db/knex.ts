@@ -1,5 +1,9 @@
 import knex, { type Knex } from 'knex';
+import { types } from 'pg';
 import config from '../knexfile';
+
+// A DATE is a calendar day, not an instant: as a Date object it would shift with the server's time zone.
+types.setTypeParser(types.builtins.DATE, (value: string) => value);
 
 // One pool per process: Next's module reloading in development would otherwise open a pool per reload.
 const globalForDb = globalThis as unknown as { plumblineDb?: Knex };

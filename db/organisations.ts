@@ -1,4 +1,5 @@
 import { appendAudit } from './audit';
+import { insertDefaultLadder } from './consequence-levels';
 import { getDb } from './knex';
 import type { Conn, OrganisationRow, PublicUser } from './types';
 import { insertUser } from './users';
@@ -26,6 +27,7 @@ export async function createOrganisationWithAdmin(
       displayName: input.displayName,
     });
     await trx('memberships').insert({ organisation_id: organisation.id, user_id: user.id, role: 'admin' });
+    await insertDefaultLadder(trx, organisation.id);
     await appendAudit(trx, {
       organisationId: organisation.id,
       actorUserId: user.id,

@@ -61,3 +61,67 @@ export interface Member {
 
 /** A user as others may see it: never the password hash. */
 export type PublicUser = Omit<UserRow, 'password_hash'>;
+
+export interface SiteRow {
+  id: string;
+  organisation_id: string;
+  name: string;
+  kind: import('@/lib/register/model').SiteKind;
+  location: string;
+  surface: import('@/lib/register/model').Surface;
+  water_depth_m: number | null;
+  altitude_m: number;
+  design_wind_m_s: number;
+  current_m_s: number;
+  notes: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface LevelRow {
+  id: string;
+  organisation_id: string;
+  site_id: string;
+  name: string;
+  floor_height_m: number;
+  surface: import('@/lib/register/model').Surface;
+  water_depth_m: number | null;
+  notes: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface ItemRow {
+  id: string;
+  organisation_id: string;
+  site_id: string;
+  level_id: string;
+  tag: string;
+  description: string;
+  category: import('@/lib/register/model').ItemCategory;
+  quantity: number;
+  mass_kg: number;
+  shape: string;
+  dimensions_m: Record<string, number>;
+  cd: number | null;
+  area_m2: number | null;
+  volume_m3: number | null;
+  height_m: number | null;
+  securing: import('@/lib/register/model').Securing;
+  /** YYYY-MM-DD */
+  last_inspected: string | null;
+  notes: string;
+  fall_time_s: number | null;
+  impact_speed_m_s: number | null;
+  impact_energy_j: number | null;
+  effective_energy_j: number | null;
+  drift_m: number | null;
+  sinks: boolean | null;
+  consequence_level_id: string | null;
+  model_version: string | null;
+  inputs_hash: string | null;
+  computed_at: Date | null;
+  compute_error: string | null;
+  created_at: Date;
+  updated_at: Date;
+}

@@ -17,6 +17,11 @@ class BodyError extends Error {
 
 /** Reads a JSON object body and validates it; anything else answers 400 with the field at fault. */
 export async function readJson<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
+  return schema.parse(await readJsonObject(request));
+}
+
+/** A JSON object body, for handlers whose schema depends on what the body says (its unit system, say). */
+export async function readJsonObject(request: Request): Promise<Record<string, unknown>> {
   let body: unknown;
   try {
     body = await request.json();
@@ -26,7 +31,12 @@ export async function readJson<S extends z.ZodType>(request: Request, schema: S)
   if (typeof body !== 'object' || body === null || Array.isArray(body)) {
     throw new BodyError({ path: '(body)', message: 'The body must be a JSON object.' });
   }
-  return schema.parse(body);
+  return body as Record<string, unknown>;
+}
+
+/** Fails the request with 400 and the field at fault, the same shape as a validation error. */
+export function badRequest(path: string, message: string): never {
+  throw new BodyError({ path, message });
 }
 
 type Handler<P> = (request: Request, context: { member: Member; params: P }) => Promise<Response>;

@@ -96,7 +96,10 @@ export function enumField<const T extends readonly [string, ...string[]]>(values
 /** The unit system a form or request declares; SI when it says nothing. */
 export const unitsField = z.preprocess((v) => (v === undefined || v === null || v === '' ? 'si' : v), z.enum(['si', 'us'], { error: 'Units must be "si" or "us".' }));
 
-/** Turns dotted form names ("dimensions.length") into nested objects, so forms and JSON share one schema. */
+/**
+ * Turns dotted form names ("dimensions.length", "levels.0.name") into nested objects and lists, so forms and JSON
+ * share one schema.
+ */
 export function unflatten(flat: Record<string, string>): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   for (const [key, value] of Object.entries(flat)) {
@@ -108,5 +111,14 @@ export function unflatten(flat: Record<string, string>): Record<string, unknown>
     }
     node[parts[parts.length - 1]] = value;
   }
-  return out;
+  return listify(out) as Record<string, unknown>;
+}
+
+function listify(node: unknown): unknown {
+  if (typeof node !== 'object' || node === null) return node;
+  const entries = Object.entries(node as Record<string, unknown>).map(([k, v]) => [k, listify(v)] as const);
+  if (entries.length && entries.every(([k]) => /^\d+$/.test(k))) {
+    return entries.sort((a, b) => Number(a[0]) - Number(b[0])).map(([, v]) => v);
+  }
+  return Object.fromEntries(entries);
 }

@@ -1,3 +1,4 @@
+import { insertDefaultLadder } from '@/db/consequence-levels';
 import { getDb } from '@/db/knex';
 import type { Role } from '@/db/types';
 import type { ActionState } from '@/lib/actions/state';
@@ -8,7 +9,7 @@ import { requestContext } from './context';
 export const PASSWORD = 'correct-horse-battery';
 
 export async function resetDatabase(): Promise<void> {
-  await getDb().raw('TRUNCATE organisations, users, memberships, audit_log, sign_in_attempts RESTART IDENTITY CASCADE');
+  await getDb().raw('TRUNCATE organisations, users, memberships, audit_log, sign_in_attempts, consequence_levels, sites, site_levels, items RESTART IDENTITY CASCADE');
 }
 
 let sharedHash: string | undefined;
@@ -27,6 +28,7 @@ export async function createOrg(name: string, prefix: string): Promise<OrgFixtur
   const db = getDb();
   const hash = await passwordHash();
   const [org] = await db('organisations').insert({ name }).returning('id');
+  await insertDefaultLadder(db, org.id);
   const users = {} as OrgFixture['users'];
   for (const role of ['admin', 'engineer', 'reviewer', 'viewer'] as const) {
     const email = `${prefix}-${role}@test.example`;

@@ -1,0 +1,63 @@
+import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import type { ConsequenceLevel } from '@/lib/register/model';
+import type { LadderInput } from '@/lib/validation/consequence-level';
+import { appendAudit } from './audit';
+import { getDb } from './knex';
+import type { Conn } from './types';
+
+const COLUMNS = ['id', 'rank', 'name', 'lower_bound_j', 'colour', 'guidance', 'source'] as const;
+
+export async function listLadder(organisationId: string, conn: Conn = getDb()): Promise<ConsequenceLevel[]> {
+  return conn('consequence_levels').where({ organisation_id: organisationId }).orderBy('rank').select(COLUMNS);
+}
+
+/** Every new organisation starts with the default ladder, in the transaction that creates it. */
+export async function insertDefaultLadder(trx: Conn, organisationId: string): Promise<void> {
+  await trx('consequence_levels').insert(DEFAULT_LADDER.map((l) => ({ ...l, organisation_id: organisationId })));
+}
+
+/** Points every item of the organisation at the level its stored energy falls in. */
+export async function reclassifyItems(trx: Conn, organisationId: string): Promise<number> {
+  return trx.raw(
+    `UPDATE items AS i SET consequence_level_id = (
+       SELECT c.id FROM consequence_levels c
+        WHERE c.organisation_id = i.organisation_id AND c.lower_bound_j <= i.effective_energy_j
+        ORDER BY c.lower_bound_j DESC LIMIT 1)
+     WHERE i.organisation_id = ?`,
+    [organisationId],
+  ).then((r: { rowCount: number }) => r.rowCount);
+}
+
+/**
+ * Replaces the whole ladder and reclassifies every item in the same transaction, so no item ever points at a
+ * level that no longer means what it did.
+ */
+export async function replaceLadder(
+  organisationId: string,
+  actorUserId: string,
+  input: LadderInput,
+  conn: Conn = getDb(),
+): Promise<{ ladder: ConsequenceLevel[]; reclassified: number }> {
+  return conn.transaction(async (trx) => {
+    await trx.raw('SELECT id FROM organisations WHERE id = ? FOR UPDATE', [organisationId]);
+    const before = await listLadder(organisationId, trx);
+    await trx('items').where({ organisation_id: organisationId }).update({ consequence_level_id: null });
+    await trx('consequence_levels').where({ organisation_id: organisationId }).delete();
+    await trx('consequence_levels').insert(
+      input.levels.map((l, i) => ({ ...l, rank: i + 1, organisation_id: organisationId })),
+    );
+    const reclassified = await reclassifyItems(trx, organisationId);
+    const ladder = await listLadder(organisationId, trx);
+    const strip = (levels: ConsequenceLevel[]) => levels.map(({ name, lower_bound_j, colour }) => ({ name, lower_bound_j, colour }));
+    await appendAudit(trx, {
+      organisationId,
+      actorUserId,
+      action: 'ladder.changed',
+      entityType: 'consequence_ladder',
+      entityId: organisationId,
+      before: strip(before),
+      after: { levels: strip(ladder), reclassified_items: reclassified },
+    });
+    return { ladder, reclassified };
+  });
+}

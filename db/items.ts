@@ -1,0 +1,307 @@
+import { computeItem, fallHeight, type ComputedResult, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
+import type { RegisterRow } from '@/lib/register/model';
+import type { RegisterExportRow } from '@/lib/register/csv';
+import type { ItemInput } from '@/lib/validation/item';
+import { ConflictError, NotFoundError } from '@/lib/errors';
+import { appendAudit } from './audit';
+import { listLadder } from './consequence-levels';
+import { getDb } from './knex';
+import type { AuditRow, Conn, ItemRow, LevelRow, SiteRow } from './types';
+
+const RESULT_COLUMNS = [
+  'fall_time_s',
+  'impact_speed_m_s',
+  'impact_energy_j',
+  'effective_energy_j',
+  'drift_m',
+  'sinks',
+  'consequence_level_id',
+  'model_version',
+  'inputs_hash',
+  'compute_error',
+] as const;
+const RESULT_TYPES = ['float8', 'float8', 'float8', 'float8', 'float8', 'bool', 'uuid', 'text', 'text', 'text'];
+
+/** The input fields an audit entry records: what a person changed, not what the computer derived. */
+function inputFields(item: Partial<ItemRow> | ItemInput) {
+  const { tag, description, category, quantity, mass_kg, shape, dimensions_m, cd, area_m2, volume_m3, level_id, height_m, securing, last_inspected, notes } =
+    item as ItemRow;
+  return { tag, description, category, quantity, mass_kg, shape, dimensions_m, cd, area_m2, volume_m3, level_id, height_m, securing, last_inspected, notes };
+}
+
+function duplicateTag(error: unknown, tag?: string): never {
+  if ((error as { code?: string }).code === '23505' && String((error as { constraint?: string }).constraint).startsWith('items_site_tag')) {
+    throw new ConflictError('tag', tag ? `Tag "${tag}" is already in this site's register.` : 'A tag is already in this site’s register.');
+  }
+  throw error;
+}
+
+type SettingRow = ItemPhysics & FallSetting & { id: string };
+
+function settingQuery(trx: Conn, organisationId: string) {
+  return trx('items as i')
+    .join('site_levels as l', 'l.id', 'i.level_id')
+    .join('sites as s', 's.id', 'i.site_id')
+    .where('i.organisation_id', organisationId)
+    .select(
+      'i.id',
+      'i.mass_kg',
+      'i.shape',
+      'i.dimensions_m',
+      'i.cd',
+      'i.area_m2',
+      'i.volume_m3',
+      'i.height_m',
+      'l.floor_height_m',
+      'l.surface',
+      'l.water_depth_m',
+      's.altitude_m',
+      's.design_wind_m_s',
+      's.current_m_s',
+    );
+}
+
+/** Writes many items' results in one statement per chunk: a site with thousands of items recomputes in one go. */
+async function writeResults(trx: Conn, ids: string[], results: ComputedResult[]): Promise<void> {
+  const CHUNK = 2000;
+  for (let start = 0; start < ids.length; start += CHUNK) {
+    const slice = results.slice(start, start + CHUNK);
+    const columns = RESULT_COLUMNS.map((c) => slice.map((r) => r[c]));
+    const unnest = RESULT_TYPES.map((t) => `?::${t}[]`).join(', ');
+    await trx.raw(
+      `UPDATE items AS i SET ${RESULT_COLUMNS.map((c) => `${c} = v.${c}`).join(', ')}, computed_at = now()
+         FROM unnest(?::uuid[], ${unnest}) AS v(id, ${RESULT_COLUMNS.join(', ')})
+        WHERE i.id = v.id`,
+      // pg sends each JS array as a PostgreSQL array; null entries stay NULL.
+      [ids.slice(start, start + CHUNK), ...columns] as unknown as string[][],
+    );
+  }
+}
+
+/**
+ * Recomputes the stored results of the items that match, inside the caller's transaction: whoever changes an
+ * input of a fall also rewrites its result before committing, so no stored energy is ever stale.
+ */
+export async function recomputeItems(
+  trx: Conn,
+  organisationId: string,
+  scope: { siteId: string } | { levelId: string } | { itemIds: string[] },
+): Promise<number> {
+  const query = settingQuery(trx, organisationId);
+  if ('siteId' in scope) query.where('i.site_id', scope.siteId);
+  else if ('levelId' in scope) query.where('i.level_id', scope.levelId);
+  else query.whereIn('i.id', scope.itemIds);
+  const rows: SettingRow[] = await query;
+  if (!rows.length) return 0;
+  const ladder = await listLadder(organisationId, trx);
+  await writeResults(
+    trx,
+    rows.map((r) => r.id),
+    rows.map((r) => computeItem(r, r, ladder)),
+  );
+  return rows.length;
+}
+
+async function lockedLevel(trx: Conn, organisationId: string, siteId: string, levelId: string): Promise<LevelRow & Pick<SiteRow, 'altitude_m' | 'design_wind_m_s' | 'current_m_s'>> {
+  const level = await trx('site_levels as l')
+    .join('sites as s', 's.id', 'l.site_id')
+    .where({ 'l.id': levelId, 'l.site_id': siteId, 'l.organisation_id': organisationId })
+    .forShare()
+    .first('l.*', 's.altitude_m', 's.design_wind_m_s', 's.current_m_s');
+  if (!level) throw new ConflictError('level_id', 'Level must be one of this site’s levels.', 422);
+  return level;
+}
+
+function toRow(input: ItemInput) {
+  return { ...inputFields(input), dimensions_m: JSON.stringify(input.dimensions_m) };
+}
+
+export async function createItem(organisationId: string, actorUserId: string, siteId: string, input: ItemInput, conn: Conn = getDb()): Promise<ItemRow> {
+  return conn.transaction(async (trx) => {
+    const site = await trx('sites').where({ id: siteId, organisation_id: organisationId }).first('id');
+    if (!site) throw new NotFoundError('No such site');
+    const setting = await lockedLevel(trx, organisationId, siteId, input.level_id);
+    const result = computeItem(input, setting, await listLadder(organisationId, trx));
+    const [row] = await trx('items')
+      .insert({ ...toRow(input), ...result, computed_at: trx.fn.now(), organisation_id: organisationId, site_id: siteId })
+      .returning('*')
+      .catch((e) => duplicateTag(e, input.tag));
+    await appendAudit(trx, { organisationId, actorUserId, action: 'item.created', entityType: 'item', entityId: row.id, after: inputFields(input) });
+    return row;
+  });
+}
+
+export async function updateItem(organisationId: string, actorUserId: string, itemId: string, input: ItemInput, conn: Conn = getDb()): Promise<ItemRow> {
+  return conn.transaction(async (trx) => {
+    const before: ItemRow | undefined = await trx('items').where({ id: itemId, organisation_id: organisationId }).forUpdate().first();
+    if (!before) throw new NotFoundError('No such item');
+    const setting = await lockedLevel(trx, organisationId, before.site_id, input.level_id);
+    const result = computeItem(input, setting, await listLadder(organisationId, trx));
+    const [row] = await trx('items')
+      .where({ id: itemId })
+      .update({ ...toRow(input), ...result, computed_at: trx.fn.now(), updated_at: trx.fn.now() })
+      .returning('*')
+      .catch((e) => duplicateTag(e, input.tag));
+    await appendAudit(trx, {
+      organisationId,
+      actorUserId,
+      action: 'item.updated',
+      entityType: 'item',
+      entityId: itemId,
+      before: inputFields(before),
+      after: inputFields(input),
+    });
+    return row;
+  });
+}
+
+export async function deleteItem(organisationId: string, actorUserId: string, itemId: string, conn: Conn = getDb()): Promise<void> {
+  await conn.transaction(async (trx) => {
+    const before: ItemRow | undefined = await trx('items').where({ id: itemId, organisation_id: organisationId }).forUpdate().first();
+    if (!before) throw new NotFoundError('No such item');
+    await trx('items').where({ id: itemId }).delete();
+    await appendAudit(trx, { organisationId, actorUserId, action: 'item.deleted', entityType: 'item', entityId: itemId, before: inputFields(before) });
+  });
+}
+
+/**
+ * Adds many items in one transaction: all of them, computed, or none. Used by the CSV import, whose rows were
+ * validated against the site's levels beforehand; a level deleted meanwhile fails the whole import.
+ */
+export async function importItems(
+  organisationId: string,
+  actorUserId: string,
+  siteId: string,
+  inputs: ItemInput[],
+  meta: { file_name: string; mode: string; skipped_rows: number },
+  conn: Conn = getDb(),
+): Promise<number> {
+  return conn.transaction(async (trx) => {
+    const site: SiteRow | undefined = await trx('sites').where({ id: siteId, organisation_id: organisationId }).forUpdate().first();
+    if (!site) throw new NotFoundError('No such site');
+    const levels: LevelRow[] = await trx('site_levels').where({ site_id: siteId, organisation_id: organisationId });
+    const byId = new Map(levels.map((l) => [l.id, l]));
+    const ladder = await listLadder(organisationId, trx);
+    const rows = inputs.map((input, i) => {
+      const level = byId.get(input.level_id);
+      if (!level) throw new ConflictError(`${i}.level_id`, 'A level named in the file no longer exists: nothing was imported.', 422);
+      const result = computeItem(input, { ...level, altitude_m: site.altitude_m, design_wind_m_s: site.design_wind_m_s, current_m_s: site.current_m_s }, ladder);
+      return { ...toRow(input), ...result, computed_at: trx.fn.now(), organisation_id: organisationId, site_id: siteId };
+    });
+    const CHUNK = 1000;
+    for (let start = 0; start < rows.length; start += CHUNK) {
+      await trx('items').insert(rows.slice(start, start + CHUNK)).catch((e) => duplicateTag(e));
+    }
+    await appendAudit(trx, {
+      organisationId,
+      actorUserId,
+      action: 'items.imported',
+      entityType: 'site',
+      entityId: siteId,
+      after: { imported: rows.length, ...meta },
+    });
+    return rows.length;
+  });
+}
+
+export interface ItemDetail extends ItemRow {
+  level_name: string;
+  floor_height_m: number;
+  surface: LevelRow['surface'];
+  water_depth_m: number | null;
+  site_name: string;
+  altitude_m: number;
+  design_wind_m_s: number;
+  current_m_s: number;
+}
+
+export async function findItem(organisationId: string, itemId: string, conn: Conn = getDb()): Promise<ItemDetail | undefined> {
+  return conn('items as i')
+    .join('site_levels as l', 'l.id', 'i.level_id')
+    .join('sites as s', 's.id', 'i.site_id')
+    .where({ 'i.id': itemId, 'i.organisation_id': organisationId })
+    .first(
+      'i.*',
+      'l.name as level_name',
+      'l.floor_height_m',
+      'l.surface',
+      'l.water_depth_m',
+      's.name as site_name',
+      's.altitude_m',
+      's.design_wind_m_s',
+      's.current_m_s',
+    );
+}
+
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+
+function registerQuery(conn: Conn, organisationId: string, siteId: string) {
+  return conn('items as i')
+    .join('site_levels as l', 'l.id', 'i.level_id')
+    .where({ 'i.site_id': siteId, 'i.organisation_id': organisationId })
+    .orderBy([{ column: 'l.floor_height_m', order: 'desc' }, { column: 'i.tag' }])
+    .select('i.*', 'l.name as level_name', 'l.floor_height_m');
+}
+
+function toRegisterRow(r: ItemRow & { level_name: string; floor_height_m: number }): RegisterRow {
+  return {
+    id: r.id,
+    tag: r.tag,
+    description: r.description,
+    category: r.category,
+    quantity: r.quantity,
+    mass_kg: r.mass_kg,
+    shape: r.shape,
+    level_id: r.level_id,
+    level_name: r.level_name,
+    height_m: fallHeight(r, r),
+    height_overridden: r.height_m !== null,
+    securing: r.securing,
+    last_inspected: r.last_inspected,
+    updated_at: r.updated_at.toISOString(),
+    fall_time_s: r.fall_time_s,
+    impact_speed_m_s: r.impact_speed_m_s,
+    impact_energy_j: r.impact_energy_j,
+    effective_energy_j: r.effective_energy_j,
+    drift_m: r.drift_m,
+    sinks: r.sinks,
+    consequence_level_id: r.consequence_level_id,
+    model_version: r.model_version,
+    inputs_hash: r.inputs_hash,
+    computed_at: iso(r.computed_at),
+    compute_error: r.compute_error,
+  };
+}
+
+export async function listRegister(organisationId: string, siteId: string, conn: Conn = getDb()): Promise<RegisterRow[]> {
+  const rows = await registerQuery(conn, organisationId, siteId);
+  return rows.map(toRegisterRow);
+}
+
+export async function listRegisterForExport(organisationId: string, siteId: string, conn: Conn = getDb()): Promise<RegisterExportRow[]> {
+  const rows = await registerQuery(conn, organisationId, siteId);
+  return rows.map((r: ItemRow & { level_name: string; floor_height_m: number }) => ({
+    ...toRegisterRow(r),
+    dimensions_m: r.dimensions_m,
+    cd: r.cd,
+    area_m2: r.area_m2,
+    volume_m3: r.volume_m3,
+    notes: r.notes,
+    height_override_m: r.height_m,
+  }));
+}
+
+export async function siteTags(organisationId: string, siteId: string, conn: Conn = getDb()): Promise<string[]> {
+  const rows = await conn('items').where({ organisation_id: organisationId, site_id: siteId }).select('tag');
+  return rows.map((r: { tag: string }) => r.tag);
+}
+
+/** The item's audited changes, newest first. */
+export async function itemHistory(organisationId: string, itemId: string, conn: Conn = getDb()): Promise<(AuditRow & { actor_name: string | null })[]> {
+  return conn('audit_log as a')
+    .leftJoin('users as u', 'u.id', 'a.actor_user_id')
+    .where({ 'a.organisation_id': organisationId, 'a.entity_type': 'item', 'a.entity_id': itemId })
+    .orderBy('a.id', 'desc')
+    .limit(50)
+    .select('a.*', 'u.display_name as actor_name');
+}

@@ -1,0 +1,95 @@
+import { ConflictError, NotFoundError } from '@/lib/errors';
+import type { LevelInput } from '@/lib/validation/level';
+import { appendAudit } from './audit';
+import { recomputeItems } from './items';
+import { getDb } from './knex';
+import type { Conn, LevelRow } from './types';
+
+export interface LevelListing extends LevelRow {
+  line_count: number;
+}
+
+function duplicateName(error: unknown, name: string): never {
+  if ((error as { code?: string }).code === '23505') throw new ConflictError('name', `This site already has a level named "${name}".`);
+  throw error;
+}
+
+function toColumns(input: LevelInput) {
+  return { name: input.name, floor_height_m: input.floor_height, surface: input.surface, water_depth_m: input.water_depth, notes: input.notes };
+}
+
+const pick = ({ name, floor_height_m, surface, water_depth_m, notes }: Partial<LevelRow>) => ({ name, floor_height_m, surface, water_depth_m, notes });
+
+/** Highest first, the way a survey walks a structure from the top down. */
+export async function listLevels(organisationId: string, siteId: string, conn: Conn = getDb()): Promise<LevelListing[]> {
+  const rows: (LevelRow & { line_count: string })[] = await conn('site_levels as l')
+    .leftJoin('items as i', 'i.level_id', 'l.id')
+    .where({ 'l.site_id': siteId, 'l.organisation_id': organisationId })
+    .groupBy('l.id')
+    .orderBy([{ column: 'l.floor_height_m', order: 'desc' }, { column: 'l.name' }])
+    .select('l.*')
+    .count('i.id as line_count');
+  return rows.map((r) => ({ ...r, line_count: Number(r.line_count) }));
+}
+
+export async function findLevel(organisationId: string, levelId: string, conn: Conn = getDb()): Promise<LevelRow | undefined> {
+  return conn<LevelRow>('site_levels').where({ id: levelId, organisation_id: organisationId }).first();
+}
+
+export async function createLevel(organisationId: string, actorUserId: string, siteId: string, input: LevelInput, conn: Conn = getDb()): Promise<LevelRow> {
+  return conn.transaction(async (trx) => {
+    const site = await trx('sites').where({ id: siteId, organisation_id: organisationId }).forShare().first('id');
+    if (!site) throw new NotFoundError('No such site');
+    const [level] = await trx<LevelRow>('site_levels')
+      .insert({ ...toColumns(input), site_id: siteId, organisation_id: organisationId })
+      .returning('*')
+      .catch((e) => duplicateName(e, input.name));
+    await appendAudit(trx, { organisationId, actorUserId, action: 'level.created', entityType: 'level', entityId: level.id, after: { site_id: siteId, ...pick(level) } });
+    return level;
+  });
+}
+
+/** A changed floor height or surface below changes every fall from the level: they are recomputed before commit. */
+export async function updateLevel(
+  organisationId: string,
+  actorUserId: string,
+  levelId: string,
+  input: LevelInput,
+  conn: Conn = getDb(),
+): Promise<{ level: LevelRow; recomputed: number }> {
+  return conn.transaction(async (trx) => {
+    const before = await trx<LevelRow>('site_levels').where({ id: levelId, organisation_id: organisationId }).forUpdate().first();
+    if (!before) throw new NotFoundError('No such level');
+    const [level] = await trx<LevelRow>('site_levels')
+      .where({ id: levelId })
+      .update({ ...toColumns(input), updated_at: trx.fn.now() })
+      .returning('*')
+      .catch((e) => duplicateName(e, input.name));
+    const changed = before.floor_height_m !== level.floor_height_m || before.surface !== level.surface || before.water_depth_m !== level.water_depth_m;
+    const recomputed = changed ? await recomputeItems(trx, organisationId, { levelId }) : 0;
+    await appendAudit(trx, {
+      organisationId,
+      actorUserId,
+      action: 'level.updated',
+      entityType: 'level',
+      entityId: levelId,
+      before: pick(before),
+      after: { ...pick(level), recomputed_items: recomputed },
+    });
+    return { level, recomputed };
+  });
+}
+
+/** Only an empty level may go: deleting one with items would silently drop them from the register. */
+export async function deleteLevel(organisationId: string, actorUserId: string, levelId: string, conn: Conn = getDb()): Promise<void> {
+  await conn.transaction(async (trx) => {
+    const before = await trx<LevelRow>('site_levels').where({ id: levelId, organisation_id: organisationId }).forUpdate().first();
+    if (!before) throw new NotFoundError('No such level');
+    const used = await trx('items').where({ level_id: levelId }).count<{ count: string }[]>('* as count');
+    if (Number(used[0].count) > 0) {
+      throw new ConflictError('level', `Level "${before.name}" still has ${used[0].count} item(s): move or delete them first.`);
+    }
+    await trx('site_levels').where({ id: levelId }).delete();
+    await appendAudit(trx, { organisationId, actorUserId, action: 'level.deleted', entityType: 'level', entityId: levelId, before: { site_id: before.site_id, ...pick(before) } });
+  });
+}

@@ -1,0 +1,20 @@
+import type { Member } from '@/db/types';
+import { findSite } from '@/db/sites';
+import { NotFoundError } from '@/lib/errors';
+import { unitsField } from '@/lib/validation/quantity';
+
+/** Who may change the register; everyone in the organisation may read it. */
+export const EDITORS = ['admin', 'engineer'] as const;
+
+/** The unit system a JSON body declares, and the body without that key. */
+export function bodyUnits(body: Record<string, unknown>): { units: 'si' | 'us'; rest: Record<string, unknown> } {
+  const { units, ...rest } = body;
+  return { units: unitsField.parse(units), rest };
+}
+
+/** A site of the caller's organisation; another organisation's id is simply not found. */
+export async function siteOf(member: Member, id: string) {
+  const site = /^[0-9a-f-]{36}$/i.test(id) ? await findSite(member.organisationId, id) : undefined;
+  if (!site) throw new NotFoundError('No such site');
+  return site;
+}

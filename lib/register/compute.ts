@@ -1,0 +1,117 @@
+import { createHash } from 'node:crypto';
+import { MODEL_VERSION, PhysicsInputError, PhysicsSolveError, simulateDrop, type DropCase, type DropResult, type ShapeId } from '@/lib/physics';
+import type { ConsequenceLevel, StoredResult, Surface } from './model';
+
+/** What of an item the fall depends on. */
+export interface ItemPhysics {
+  mass_kg: number;
+  shape: string;
+  dimensions_m: Record<string, number>;
+  cd: number | null;
+  area_m2: number | null;
+  volume_m3: number | null;
+  height_m: number | null;
+}
+
+/** What of its level and site the fall depends on. */
+export interface FallSetting {
+  floor_height_m: number;
+  surface: Surface;
+  water_depth_m: number | null;
+  altitude_m: number;
+  design_wind_m_s: number;
+  current_m_s: number;
+}
+
+export function fallHeight(item: Pick<ItemPhysics, 'height_m'>, setting: Pick<FallSetting, 'floor_height_m'>): number {
+  return item.height_m ?? setting.floor_height_m;
+}
+
+/**
+ * The drop case a register item stands for: released from rest at its height, through ISA air at the site's
+ * altitude in the site's design wind, then (over the sea) through seawater in the site's current to the seabed.
+ * Newton's quadratic law, the regime of practically every dropped object.
+ */
+export function itemDropCase(item: ItemPhysics, setting: FallSetting, samples = 0): DropCase {
+  const object: DropCase['object'] = { mass_kg: item.mass_kg };
+  if (item.shape !== 'direct') {
+    object.shape = item.shape as ShapeId;
+    object.dimensions_m = item.dimensions_m;
+  }
+  if (item.cd !== null) object.cd = item.cd;
+  if (item.area_m2 !== null) object.area_m2 = item.area_m2;
+  if (item.volume_m3 !== null) object.volume_m3 = item.volume_m3;
+  const air = { preset: 'isa' as const, altitude_m: setting.altitude_m, temperature_offset_c: 0 };
+  const height = fallHeight(item, setting);
+  const base = { object, drag_model: 'quadratic' as const, ...(samples ? { samples } : {}) };
+  if (setting.surface === 'water' && setting.water_depth_m) {
+    const layers: NonNullable<DropCase['layers']> = [];
+    if (height > 0) layers.push({ medium: air, thickness_m: height, flow_m_s: setting.design_wind_m_s });
+    layers.push({ medium: { preset: 'seawater' }, thickness_m: setting.water_depth_m, flow_m_s: setting.current_m_s });
+    return { ...base, layers, release: { velocity_m_s: [0, 0] } };
+  }
+  return { ...base, medium: air, wind_m_s: setting.design_wind_m_s, release: { height_m: height, velocity_m_s: [0, 0] } };
+}
+
+/** Identifies the exact inputs of a stored result, model version included, so staleness can be checked. */
+export function inputsHash(dropCase: DropCase): string {
+  return createHash('sha256').update(JSON.stringify({ model: MODEL_VERSION, case: dropCase })).digest('hex');
+}
+
+/** The level whose bound is the highest at or below the energy; ladders start at 0 J, so there always is one. */
+export function classify(energyJ: number | null, ladder: readonly Pick<ConsequenceLevel, 'id' | 'lower_bound_j'>[]): string | null {
+  if (energyJ === null || !Number.isFinite(energyJ)) return null;
+  let found: string | null = null;
+  let bound = -Infinity;
+  for (const level of ladder) {
+    if (level.lower_bound_j <= energyJ && level.lower_bound_j > bound) {
+      found = level.id;
+      bound = level.lower_bound_j;
+    }
+  }
+  return found;
+}
+
+export type ComputedResult = Omit<StoredResult, 'computed_at'>;
+
+function fromResult(result: DropResult, hash: string, ladder: readonly Pick<ConsequenceLevel, 'id' | 'lower_bound_j'>[]): ComputedResult {
+  return {
+    fall_time_s: result.fall_time_s,
+    impact_speed_m_s: result.impact_speed_m_s,
+    impact_energy_j: result.impact_energy_j,
+    effective_energy_j: result.effective_impact_energy_j,
+    drift_m: Math.abs(result.drift_m),
+    sinks: result.sinks,
+    consequence_level_id: classify(result.effective_impact_energy_j, ladder),
+    model_version: result.model_version,
+    inputs_hash: hash,
+    compute_error: null,
+  };
+}
+
+/** An item's fall with the physics core; a case the core refuses is stored as an error, never as a number. */
+export function computeItem(
+  item: ItemPhysics,
+  setting: FallSetting,
+  ladder: readonly Pick<ConsequenceLevel, 'id' | 'lower_bound_j'>[],
+): ComputedResult {
+  const dropCase = itemDropCase(item, setting);
+  const hash = inputsHash(dropCase);
+  try {
+    return fromResult(simulateDrop(dropCase), hash, ladder);
+  } catch (error) {
+    if (!(error instanceof PhysicsInputError) && !(error instanceof PhysicsSolveError)) throw error;
+    return {
+      fall_time_s: null,
+      impact_speed_m_s: null,
+      impact_energy_j: null,
+      effective_energy_j: null,
+      drift_m: null,
+      sinks: null,
+      consequence_level_id: null,
+      model_version: MODEL_VERSION,
+      inputs_hash: hash,
+      compute_error: error.message,
+    };
+  }
+}
