@@ -1,0 +1,34 @@
+import { deleteItem, findItem, updateItem } from '@/db/items';
+import { NotFoundError } from '@/lib/errors';
+import { apiRoute, readJsonObject } from '@/lib/http/api';
+import { bodyUnits, EDITORS } from '@/lib/register/api';
+import { itemValues } from '@/lib/register/form-values';
+import type { Member } from '@/db/types';
+import { itemSchema } from '@/lib/validation/item';
+
+type Params = { id: string };
+
+async function itemOf(member: Member, id: string) {
+  const item = /^[0-9a-f-]{36}$/i.test(id) ? await findItem(member.organisationId, id) : undefined;
+  if (!item) throw new NotFoundError('No such item');
+  return item;
+}
+
+export const GET = apiRoute<Params>('any', async (_request, { member, params }) => Response.json({ item: await itemOf(member, params.id) }));
+
+/** Any subset of the fields (dimensions merge key by key); the merged item is checked whole and recomputed. */
+export const PATCH = apiRoute<Params>(EDITORS, async (request, { member, params }) => {
+  const item = await itemOf(member, params.id);
+  const { units, rest } = bodyUnits(await readJsonObject(request));
+  const stored = itemValues(item, units, true);
+  const dimensions = typeof rest.dimensions === 'object' && rest.dimensions !== null ? { ...stored.dimensions, ...rest.dimensions } : stored.dimensions;
+  const input = itemSchema(units).parse({ ...stored, ...rest, dimensions });
+  await updateItem(member.organisationId, member.userId, item.id, input);
+  return Response.json({ item: await findItem(member.organisationId, item.id) });
+});
+
+export const DELETE = apiRoute<Params>(EDITORS, async (_request, { member, params }) => {
+  const item = await itemOf(member, params.id);
+  await deleteItem(member.organisationId, member.userId, item.id);
+  return new Response(null, { status: 204 });
+});

@@ -1,0 +1,28 @@
+import { listLevels } from '@/db/levels';
+import { deleteSite, updateSite } from '@/db/sites';
+import { apiRoute, readJsonObject } from '@/lib/http/api';
+import { bodyUnits, EDITORS, siteOf } from '@/lib/register/api';
+import { siteValues } from '@/lib/register/form-values';
+import { siteSchema } from '@/lib/validation/site';
+
+type Params = { id: string };
+
+export const GET = apiRoute<Params>('any', async (_request, { member, params }) => {
+  const site = await siteOf(member, params.id);
+  return Response.json({ site, levels: await listLevels(member.organisationId, site.id) });
+});
+
+/** Any subset of the fields; the merged site is checked as a whole, and a changed wind recomputes its items. */
+export const PATCH = apiRoute<Params>(EDITORS, async (request, { member, params }) => {
+  const site = await siteOf(member, params.id);
+  const { units, rest } = bodyUnits(await readJsonObject(request));
+  const input = siteSchema(units).parse({ ...siteValues(site, units, true), ...rest });
+  const updated = await updateSite(member.organisationId, member.userId, site.id, input);
+  return Response.json({ site: updated.site, recomputed_items: updated.recomputed });
+});
+
+export const DELETE = apiRoute<Params>(EDITORS, async (_request, { member, params }) => {
+  const site = await siteOf(member, params.id);
+  await deleteSite(member.organisationId, member.userId, site.id);
+  return new Response(null, { status: 204 });
+});

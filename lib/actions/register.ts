@@ -1,0 +1,151 @@
+'use server';
+
+import { revalidatePath } from 'next/cache';
+import { redirect } from 'next/navigation';
+import { replaceLadder } from '@/db/consequence-levels';
+import { createItem, deleteItem, updateItem } from '@/db/items';
+import { createLevel, deleteLevel, updateLevel } from '@/db/levels';
+import { createSite, deleteSite, updateSite } from '@/db/sites';
+import { requireRole } from '@/lib/auth';
+import { ConflictError, NotFoundError } from '@/lib/errors';
+import { ladderSchema } from '@/lib/validation/consequence-level';
+import { formToObject, toFieldErrors } from '@/lib/validation/issues';
+import { itemSchema } from '@/lib/validation/item';
+import { levelSchema } from '@/lib/validation/level';
+import { unflatten, unitsField } from '@/lib/validation/quantity';
+import { siteSchema } from '@/lib/validation/site';
+import type { ActionState } from './state';
+
+const EDITORS = ['admin', 'engineer'] as const;
+const CHECK = 'Check the highlighted fields.';
+
+function known(error: unknown, what: string): ActionState {
+  if (error instanceof ConflictError) return { errors: { [error.field]: error.message }, message: error.message };
+  if (error instanceof NotFoundError) return { message: `That ${what} no longer exists: it may have been deleted by someone else.` };
+  throw error;
+}
+
+/** The form's fields, nested, and the unit system its numbers were typed in. */
+function read(form: FormData): { values: Record<string, unknown>; units: 'si' | 'us'; id: string } {
+  const flat = formToObject(form);
+  const units = unitsField.safeParse(flat.units);
+  return { values: unflatten(flat), units: units.success ? units.data : 'si', id: flat.id ?? '' };
+}
+
+const isUuid = (s: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(s);
+
+export async function saveSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const member = await requireRole(EDITORS);
+  const { values, units, id } = read(form);
+  const parsed = siteSchema(units).safeParse(values);
+  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
+  let siteId = id;
+  try {
+    if (id) {
+      if (!isUuid(id)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
+      const { recomputed } = await updateSite(member.organisationId, member.userId, id, parsed.data);
+      revalidatePath(`/sites/${id}`);
+      return { ok: true, message: recomputed ? `Site saved; ${recomputed} item result(s) recomputed at the new conditions.` : 'Site saved.' };
+    }
+    siteId = (await createSite(member.organisationId, member.userId, parsed.data)).id;
+  } catch (error) {
+    return known(error, 'site');
+  }
+  revalidatePath('/sites');
+  redirect(`/sites/${siteId}`);
+}
+
+export async function deleteSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const member = await requireRole(EDITORS);
+  const { id } = read(form);
+  if (!isUuid(id)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
+  try {
+    await deleteSite(member.organisationId, member.userId, id);
+  } catch (error) {
+    return known(error, 'site');
+  }
+  revalidatePath('/sites');
+  redirect('/sites');
+}
+
+export async function saveLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const member = await requireRole(EDITORS);
+  const { values, units, id } = read(form);
+  const siteId = String(values.site_id ?? '');
+  const parsed = levelSchema(units).safeParse(values);
+  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
+  try {
+    if (id) {
+      if (!isUuid(id)) return { message: 'That level no longer exists: it may have been deleted by someone else.' };
+      const { recomputed } = await updateLevel(member.organisationId, member.userId, id, parsed.data);
+      revalidatePath(`/sites/${siteId}`);
+      return { ok: true, message: recomputed ? `Level saved; ${recomputed} item result(s) recomputed.` : 'Level saved.' };
+    }
+    if (!isUuid(siteId)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
+    await createLevel(member.organisationId, member.userId, siteId, parsed.data);
+    revalidatePath(`/sites/${siteId}`);
+    return { ok: true, message: `Level “${parsed.data.name}” added.` };
+  } catch (error) {
+    return known(error, 'level');
+  }
+}
+
+export async function deleteLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const member = await requireRole(EDITORS);
+  const { id, values } = read(form);
+  if (!isUuid(id)) return { message: 'That level no longer exists: it may have been deleted by someone else.' };
+  try {
+    await deleteLevel(member.organisationId, member.userId, id);
+    revalidatePath(`/sites/${String(values.site_id ?? '')}`);
+    return { ok: true, message: 'Level deleted.' };
+  } catch (error) {
+    return known(error, 'level');
+  }
+}
+
+export async function saveItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const member = await requireRole(EDITORS);
+  const { values, units, id } = read(form);
+  const siteId = String(values.site_id ?? '');
+  const parsed = itemSchema(units).safeParse(values);
+  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
+  let itemId = id;
+  try {
+    if (id) {
+      if (!isUuid(id)) return { message: 'That item no longer exists: it may have been deleted by someone else.' };
+      await updateItem(member.organisationId, member.userId, id, parsed.data);
+      revalidatePath(`/items/${id}`);
+      return { ok: true, message: 'Item saved and its fall recomputed.' };
+    }
+    if (!isUuid(siteId)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
+    itemId = (await createItem(member.organisationId, member.userId, siteId, parsed.data)).id;
+  } catch (error) {
+    return known(error, 'item');
+  }
+  revalidatePath(`/sites/${siteId}`);
+  redirect(`/items/${itemId}?added=1`);
+}
+
+export async function deleteItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const member = await requireRole(EDITORS);
+  const { id, values } = read(form);
+  if (!isUuid(id)) return { message: 'That item no longer exists: it may have been deleted by someone else.' };
+  try {
+    await deleteItem(member.organisationId, member.userId, id);
+  } catch (error) {
+    return known(error, 'item');
+  }
+  const siteId = String(values.site_id ?? '');
+  revalidatePath(`/sites/${siteId}`);
+  redirect(isUuid(siteId) ? `/sites/${siteId}` : '/sites');
+}
+
+export async function saveLadderAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  const member = await requireRole(['admin']);
+  const { values } = read(form);
+  const parsed = ladderSchema.safeParse({ levels: values.levels ?? [] });
+  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
+  const { reclassified } = await replaceLadder(member.organisationId, member.userId, parsed.data);
+  revalidatePath('/', 'layout');
+  return { ok: true, message: `Ladder saved; ${reclassified} register line(s) reclassified.` };
+}
