@@ -53,9 +53,22 @@ export function itemDropCase(item: ItemPhysics, setting: FallSetting, samples = 
   return { ...base, medium: air, wind_m_s: setting.design_wind_m_s, release: { height_m: height, velocity_m_s: [0, 0] } };
 }
 
+/** JSON with keys sorted at every depth: PostgreSQL's jsonb does not keep the order the keys were written in. */
+function canonical(value: unknown): string {
+  if (Array.isArray(value)) return `[${value.map(canonical).join(',')}]`;
+  if (value && typeof value === 'object') {
+    const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined);
+    return `{${entries
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+      .map(([k, v]) => `${JSON.stringify(k)}:${canonical(v)}`)
+      .join(',')}}`;
+  }
+  return JSON.stringify(value);
+}
+
 /** Identifies the exact inputs of a stored result, model version included, so staleness can be checked. */
 export function inputsHash(dropCase: DropCase): string {
-  return createHash('sha256').update(JSON.stringify({ model: MODEL_VERSION, case: dropCase })).digest('hex');
+  return createHash('sha256').update(canonical({ model: MODEL_VERSION, case: dropCase })).digest('hex');
 }
 
 /** The level whose bound is the highest at or below the energy; ladders start at 0 J, so there always is one. */
