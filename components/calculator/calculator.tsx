@@ -1,6 +1,7 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
+import Link from 'next/link';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useEffect, useMemo, useState, useTransition } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
@@ -18,11 +19,11 @@ import { useDropResult } from './use-drop-result';
 
 const PLOT_SAMPLES = 240;
 
-export function Calculator({ initial }: { initial: CalculatorValues }) {
+export function Calculator({ initial, canRegister }: { initial: CalculatorValues; canRegister: boolean }) {
   const [client] = useState(() => new QueryClient());
   return (
     <QueryClientProvider client={client}>
-      <CalculatorBody initial={initial} />
+      <CalculatorBody initial={initial} canRegister={canRegister} />
     </QueryClientProvider>
   );
 }
@@ -32,7 +33,7 @@ function describe(v: CalculatorValues, c: DropCase): string {
   return `${SHAPE_LABELS[v.shape].toLowerCase()}, ${formatQuantity('mass', c.object.mass_kg, v.units)}, from ${formatQuantity('length', height, v.units)}`;
 }
 
-function CalculatorBody({ initial }: { initial: CalculatorValues }) {
+function CalculatorBody({ initial, canRegister }: { initial: CalculatorValues; canRegister: boolean }) {
   const form = useForm<CalculatorValues>({
     resolver: zodResolver(calculatorSchema),
     mode: 'onChange',
@@ -85,6 +86,14 @@ function CalculatorBody({ initial }: { initial: CalculatorValues }) {
         <ObjectSection form={form} values={values} />
         <PathSection form={form} values={values} />
         <ReleaseSection form={form} values={values} />
+        {canRegister && dropCase ? (
+          <Link
+            href={`/items/new?${toSearchParams(values).toString()}`}
+            className="self-start rounded-md border border-cord-500 bg-paper-raised px-4 py-2 text-sm font-semibold text-cord-700 hover:bg-cord-50"
+          >
+            Add to register
+          </Link>
+        ) : null}
       </form>
 
       <div className="flex min-w-0 flex-col gap-4" aria-live="polite">

@@ -1,6 +1,6 @@
 'use client';
 
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 
 interface FieldShellProps {
   id: string;
@@ -109,6 +109,24 @@ export function SelectField({ label, hint, error, options, className = '', ...se
           </option>
         ))}
       </select>
+    </FieldShell>
+  );
+}
+
+type TextAreaFieldProps = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; hint?: ReactNode; error?: string };
+
+export function TextAreaField({ label, hint, error, className = '', rows = 3, ...area }: TextAreaFieldProps) {
+  const id = useId();
+  return (
+    <FieldShell id={id} label={label} hint={hint} error={error}>
+      <textarea
+        id={id}
+        rows={rows}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, hint, error)}
+        className={`${control} ${error ? 'border-flare-500' : 'border-paper-rule'} ${className}`}
+        {...area}
+      />
     </FieldShell>
   );
 }

@@ -2,7 +2,7 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { startTransition, useActionState, useEffect, useState } from 'react';
-import { useForm, type DefaultValues, type FieldValues, type Path } from 'react-hook-form';
+import { get, useForm, type DefaultValues, type FieldValues, type Path } from 'react-hook-form';
 import type { z } from 'zod';
 import { idle, type ActionState } from '@/lib/actions/state';
 
@@ -36,7 +36,8 @@ export function useActionForm<TValues extends FieldValues>(
   });
 
   const errorFor = (name: Path<TValues>): string | undefined => {
-    const client = form.formState.errors[name]?.message;
+    // Nested names ("dimensions.length") address nested errors; `get` walks the dotted path.
+    const client = (get(form.formState.errors, name) as { message?: unknown } | undefined)?.message;
     return typeof client === 'string' ? client : state.errors?.[name];
   };
 

@@ -21,6 +21,8 @@ export function AppHeader({ member }: { member: Member }) {
         <nav aria-label="Main" className="flex flex-wrap gap-1">
           <NavLink href="/">Overview</NavLink>
           <NavLink href="/calculator">Drop calculator</NavLink>
+          <NavLink href="/sites">Sites</NavLink>
+          <NavLink href="/consequence-levels">Consequence ladder</NavLink>
           {member.role === 'admin' ? <NavLink href="/members">Members</NavLink> : null}
           <NavLink href="/profile">Profile</NavLink>
         </nav>

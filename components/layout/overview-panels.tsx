@@ -10,10 +10,22 @@ interface Panel {
 
 const COMMON: Panel[] = [
   {
+    title: 'Sites and registers',
+    body: 'Each site’s register of items at height, level by level, with every item’s fall, impact energy and consequence level stored and kept current.',
+    href: '/sites',
+    cta: 'Open the sites',
+  },
+  {
     title: 'Drop calculator',
     body: 'Fall time, impact speed and energy, drift in wind and the fall on through seawater for one object, checked against the closed forms.',
     href: '/calculator',
     cta: 'Open the calculator',
+  },
+  {
+    title: 'Consequence ladder',
+    body: 'The energy levels your organisation classifies impacts by, each bound set at a published reference energy, with the controls each level calls for.',
+    href: '/consequence-levels',
+    cta: 'See the ladder',
   },
   {
     title: 'Your profile',

@@ -117,3 +117,36 @@ export interface RegisterRow extends StoredResult {
   last_inspected: string | null;
   updated_at: string;
 }
+
+/** What the register's table and plot need in the browser: a site of thousands of items crosses the wire lighter. */
+export type RegisterViewRow = Omit<RegisterRow, 'inputs_hash' | 'model_version' | 'updated_at'>;
+
+const round = (v: number | null) => (v === null ? null : Number(v.toPrecision(6)));
+
+/** Drops what no view shows and rounds results to six figures, far finer than anything displayed. */
+export function toViewRow(r: RegisterRow): RegisterViewRow {
+  return {
+    id: r.id,
+    tag: r.tag,
+    description: r.description,
+    category: r.category,
+    quantity: r.quantity,
+    mass_kg: round(r.mass_kg)!,
+    shape: r.shape,
+    level_id: r.level_id,
+    level_name: r.level_name,
+    height_m: round(r.height_m)!,
+    height_overridden: r.height_overridden,
+    securing: r.securing,
+    last_inspected: r.last_inspected,
+    fall_time_s: round(r.fall_time_s),
+    impact_speed_m_s: round(r.impact_speed_m_s),
+    impact_energy_j: round(r.impact_energy_j),
+    effective_energy_j: round(r.effective_energy_j),
+    drift_m: round(r.drift_m),
+    sinks: r.sinks,
+    consequence_level_id: r.consequence_level_id,
+    computed_at: r.computed_at,
+    compute_error: r.compute_error,
+  };
+}

@@ -19,7 +19,7 @@ export default async function CalculatorPage({ searchParams }: { searchParams: P
           address bar reproduces this calculation for anyone in your organisation.
         </p>
       </header>
-      <Calculator initial={initial} />
+      <Calculator initial={initial} canRegister={me.role === 'admin' || me.role === 'engineer'} />
     </div>
   );
 }

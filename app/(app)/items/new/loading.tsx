@@ -1,0 +1,5 @@
+import { LoadingState } from '@/components/layout/page-states';
+
+export default function Loading() {
+  return <LoadingState />;
+}

@@ -1,0 +1,35 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { ImportPanel } from '@/components/register/import-panel';
+import { listLevels } from '@/db/levels';
+import { findSite } from '@/db/sites';
+import { requireRole } from '@/lib/auth';
+import { EDITORS } from '@/lib/register/api';
+
+export const metadata: Metadata = { title: 'Import items' };
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export default async function ImportPage({ params }: { params: Promise<{ siteId: string }> }) {
+  const member = await requireRole(EDITORS);
+  const { siteId } = await params;
+  const site = UUID.test(siteId) ? await findSite(member.organisationId, siteId) : undefined;
+  if (!site) notFound();
+  const levels = await listLevels(member.organisationId, site.id);
+  return (
+    <div className="flex flex-col gap-6">
+      <header className="flex flex-col gap-1">
+        <Link href={`/sites/${site.id}`} className="text-sm font-semibold text-cord-600 hover:underline">
+          ← {site.name}
+        </Link>
+        <h1 className="text-2xl font-bold tracking-tight">Add items to {site.name} from a file</h1>
+        <p className="max-w-3xl text-sm text-ink-muted">
+          Plumbline checks every row first and writes nothing until you choose to import. The import is one step: it
+          lands whole or not at all.
+        </p>
+      </header>
+      <ImportPanel siteId={site.id} siteName={site.name} units={member.unitSystem} levelNames={levels.map((l) => l.name)} />
+    </div>
+  );
+}

@@ -1,0 +1,218 @@
+'use client';
+
+import { useMemo } from 'react';
+import type { Annotation, Data, Layout, Shape } from 'plotly.js';
+import type { UnitSystem } from '@/db/types';
+import { PLOT_COLOURS as C, PlotFrame } from '@/components/calculator/plot-frame';
+import { LADDER_COLOURS, type ConsequenceLevel, type RegisterViewRow } from '@/lib/register/model';
+import { formatQuantity, fromSI, unitLabel } from '@/lib/units';
+import { ladderInOrder } from './ladder';
+
+interface SiteLevel {
+  id: string;
+  name: string;
+  floor_height_m: number;
+}
+
+interface Props {
+  rows: RegisterViewRow[];
+  ladder: ConsequenceLevel[];
+  levels: SiteLevel[];
+  units: UnitSystem;
+}
+
+const UNCLASSIFIED = '__unclassified';
+/** Marker shapes by rung, so the consequence level reads without telling colours apart. */
+const SYMBOLS = ['circle', 'square', 'diamond', 'triangle-up', 'pentagon', 'hexagon', 'star', 'hourglass'] as const;
+const GOLDEN = 0.6180339887498949;
+/**
+ * The golden-ratio sequence fills a row's height evenly and depends only on the item's place in the register, so
+ * the same register always draws the same way.
+ */
+const jitter = (index: number) => (((index * GOLDEN) % 1) - 0.5) * 0.6;
+
+const escapeHtml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+
+interface Bucket {
+  x: number[];
+  y: number[];
+  text: string[];
+}
+
+function buildFigure({ rows, ladder, levels, units }: Props) {
+  const ordered = ladderInOrder(ladder);
+  const E = (j: number) => fromSI('energy', j, units);
+
+  // Plotly puts the first category at the bottom: levels go lowest first, so the highest floor is drawn on top.
+  // Levels the page did not pass (there should be none) sit below the known ones rather than vanish.
+  const known = [...levels].sort((a, b) => a.floor_height_m - b.floor_height_m);
+  const knownIds = new Set(known.map((l) => l.id));
+  const strays = new Map<string, string>();
+  for (const r of rows) if (!knownIds.has(r.level_id)) strays.set(r.level_id, r.level_name);
+  const strips = [
+    ...[...strays].map(([id, name]) => ({ id, label: name })),
+    ...known.map((l) => ({ id: l.id, label: `${l.name} · ${formatQuantity('length', l.floor_height_m, units)}` })),
+  ];
+  const stripIndex = new Map(strips.map((s, i) => [s.id, i]));
+
+  const buckets = new Map<string, Bucket>();
+  const rungName = new Map(ordered.map((l) => [l.id, l.name]));
+  let withoutResult = 0;
+  let atZero = 0;
+  rows.forEach((r, i) => {
+    const energy = r.effective_energy_j;
+    if (energy === null) {
+      withoutResult += 1;
+      return;
+    }
+    if (!(energy > 0)) {
+      atZero += 1;
+      return;
+    }
+    const key = r.consequence_level_id && rungName.has(r.consequence_level_id) ? r.consequence_level_id : UNCLASSIFIED;
+    const bucket = buckets.get(key) ?? { x: [], y: [], text: [] };
+    buckets.set(key, bucket);
+    bucket.x.push(E(energy));
+    bucket.y.push((stripIndex.get(r.level_id) ?? 0) + jitter(i));
+    bucket.text.push(
+      [
+        `<b>${escapeHtml(r.tag)}</b>${r.quantity > 1 ? ` × ${r.quantity}` : ''} · ${escapeHtml(r.description)}`,
+        `Impact energy ${formatQuantity('energy', energy, units)}`,
+        `Level ${escapeHtml(r.level_name)} · ${formatQuantity('length', r.height_m, units)}`,
+        `Consequence: ${escapeHtml(rungName.get(key) ?? 'not classified')}`,
+      ].join('<br>'),
+    );
+  });
+
+  const marker = (colour: string, symbol: (typeof SYMBOLS)[number] | 'circle-open') => ({
+    color: colour,
+    size: 9,
+    symbol,
+    opacity: 0.85,
+    line: { color: 'rgba(27,36,48,0.45)', width: 0.75 },
+  });
+  const data: Data[] = [];
+  ordered.forEach((level, rung) => {
+    const b = buckets.get(level.id);
+    if (!b) return;
+    data.push({
+      type: 'scatter',
+      mode: 'markers',
+      name: level.name,
+      ...b,
+      hovertemplate: '%{text}<extra></extra>',
+      marker: marker(LADDER_COLOURS[level.colour].hex, SYMBOLS[rung % SYMBOLS.length]),
+    });
+  });
+  const stray = buckets.get(UNCLASSIFIED);
+  if (stray) {
+    data.push({
+      type: 'scatter',
+      mode: 'markers',
+      name: 'Not classified',
+      ...stray,
+      hovertemplate: '%{text}<extra></extra>',
+      marker: { ...marker('rgba(0,0,0,0)', 'circle-open'), line: { color: C.muted, width: 1.5 } },
+    });
+  }
+
+  const bounds = ordered.filter((l) => l.lower_bound_j > 0);
+  const xs = [...[...buckets.values()].flatMap((b) => b.x), ...bounds.map((l) => E(l.lower_bound_j))];
+  const lo = Math.log10(Math.min(...xs)) - 0.3;
+  const hi = Math.log10(Math.max(...xs)) + 0.3;
+
+  const shapes: Partial<Shape>[] = [
+    // Pale bands on alternate levels keep each row's markers together by eye.
+    ...strips.flatMap((_, i) =>
+      i % 2 === 0
+        ? []
+        : [{ type: 'rect' as const, xref: 'paper' as const, x0: 0, x1: 1, y0: i - 0.5, y1: i + 0.5, fillcolor: C.rule, opacity: 0.25, line: { width: 0 }, layer: 'below' as const }],
+    ),
+    ...bounds.map((l) => ({
+      type: 'line' as const,
+      yref: 'paper' as const,
+      x0: E(l.lower_bound_j),
+      x1: E(l.lower_bound_j),
+      y0: 0,
+      y1: 1,
+      line: { color: LADDER_COLOURS[l.colour].hex, width: 1.25, dash: 'dash' as const },
+    })),
+  ];
+  const annotations: Partial<Annotation>[] = bounds.map((l) => ({
+    x: Math.log10(E(l.lower_bound_j)),
+    y: 1,
+    yref: 'paper',
+    xanchor: 'left',
+    yanchor: 'bottom',
+    text: escapeHtml(l.name),
+    showarrow: false,
+    font: { size: 10, color: C.ink },
+  }));
+
+  const unit = unitLabel('energy', units);
+  const layout: Partial<Layout> = {
+    margin: { l: 16, r: 24, t: 28, b: 100 },
+    xaxis: {
+      type: 'log',
+      range: [lo, hi],
+      title: { text: `effective impact energy (${unit}, logarithmic scale)`, standoff: 6 },
+      gridcolor: C.rule,
+      exponentformat: 'none',
+      separatethousands: true,
+      zeroline: false,
+    },
+    yaxis: {
+      tickmode: 'array',
+      tickvals: strips.map((_, i) => i),
+      ticktext: strips.map((s) => escapeHtml(s.label)),
+      range: [-0.6, strips.length - 0.4],
+      showgrid: false,
+      zeroline: false,
+      fixedrange: true,
+      automargin: true,
+    },
+    shapes,
+    annotations,
+    hovermode: 'closest',
+    hoverlabel: { bgcolor: '#ffffff', bordercolor: C.rule, font: { color: C.ink, size: 12 } },
+    legend: { orientation: 'h', xref: 'container', yref: 'container', x: 0.01, y: 0.01, xanchor: 'left', yanchor: 'bottom', font: { size: 11 } },
+  };
+
+  return { data, layout, strips: strips.length, plotted: xs.length - bounds.length, withoutResult, atZero };
+}
+
+/** Each item's effective impact energy as a marker on its level's row, against the consequence ladder's bounds. */
+export function EnergyByLevelPlot(props: Props) {
+  const { rows, ladder, levels, units } = props;
+  const figure = useMemo(() => buildFigure({ rows, ladder, levels, units }), [rows, ladder, levels, units]);
+  const { withoutResult, atZero } = figure;
+  const plural = (x: number) => `${x.toLocaleString('en-GB')} item${x === 1 ? '' : 's'}`;
+
+  if (figure.plotted === 0) {
+    return (
+      <figure className="flex flex-col gap-1 rounded-card bg-paper-raised p-5 shadow-card">
+        <figcaption className="text-sm font-bold text-ink">Impact energy of each item, by level</figcaption>
+        <p className="text-sm text-ink-muted">
+          {rows.length === 0 ? 'No items on the register yet.' : 'No item has a computed impact energy to plot yet.'}
+        </p>
+      </figure>
+    );
+  }
+
+  return (
+    <div className="flex flex-col gap-1.5">
+      <PlotFrame
+        title="Impact energy of each item, by level"
+        data={figure.data}
+        layout={figure.layout}
+        height={Math.max(300, 140 + figure.strips * 44)}
+      />
+      <p className="px-1 text-xs text-ink-muted">
+        One marker per register line; markers spread a little up and down within a level only so that close energies
+        stay visible. Dashed lines mark where each consequence level begins.
+        {withoutResult > 0 ? ` ${plural(withoutResult)} without a result ${withoutResult === 1 ? 'is' : 'are'} not shown.` : ''}
+        {atZero > 0 ? ` ${plural(atZero)} at zero energy ${atZero === 1 ? 'is' : 'are'} not shown (a logarithmic scale has no zero).` : ''}
+      </p>
+    </div>
+  );
+}
