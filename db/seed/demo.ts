@@ -1,8 +1,10 @@
 // Demo organisation for the start command: an invented company, invented people, demo-only passwords.
 import { hashPassword } from '../../lib/auth/password';
+import { insertDefaultLadder } from '../consequence-levels';
 import { closeDb, getDb } from '../knex';
 import { findOrganisationByName } from '../organisations';
 import type { Role } from '../types';
+import { seedDemoRegister } from './demo-register';
 
 export const DEMO_ORGANISATION = 'Halyard Ness Access & Lifting (demo)';
 
@@ -19,11 +21,14 @@ export async function seedDemo(): Promise<boolean> {
   const hashes = await Promise.all(DEMO_USERS.map((u) => hashPassword(u.password)));
   await db.transaction(async (trx) => {
     const [org] = await trx('organisations').insert({ name: DEMO_ORGANISATION }).returning('id');
+    await insertDefaultLadder(trx, org.id);
+    const userIds: Partial<Record<Role, string>> = {};
     for (const [i, u] of DEMO_USERS.entries()) {
       const [user] = await trx('users')
         .insert({ email: u.email, password_hash: hashes[i], display_name: u.displayName })
         .returning('id');
       await trx('memberships').insert({ organisation_id: org.id, user_id: user.id, role: u.role });
+      userIds[u.role] = user.id;
     }
     await trx('audit_log').insert({
       organisation_id: org.id,
@@ -32,6 +37,7 @@ export async function seedDemo(): Promise<boolean> {
       entity_id: org.id,
       after: JSON.stringify({ name: DEMO_ORGANISATION, seeded: true }),
     });
+    await seedDemoRegister(org.id, userIds.engineer!, trx);
   });
   return true;
 }
