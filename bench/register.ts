@@ -47,7 +47,7 @@ async function fill(organisationId: string, actor: string, siteId: string, level
   const parsed = parseItemsCsv(registerFile(rows, prefix), { levels, existingTags: [] });
   const t1 = performance.now();
   if (parsed.problems.length) throw new Error(`bench file has problems: ${JSON.stringify(parsed.problems.slice(0, 3))}`);
-  const imported = await importItems(organisationId, actor, siteId, parsed.valid.map((v) => v.item), { file_name: 'bench.csv', mode: 'all-or-nothing', skipped_rows: 0 });
+  const imported = await importItems(organisationId, actor, siteId, parsed.valid, { file_name: 'bench.csv', mode: 'all-or-nothing', skipped_rows: 0 });
   const t2 = performance.now();
   return { imported, readMs: t1 - t0, storeMs: t2 - t1 };
 }

@@ -172,7 +172,7 @@ export async function importItems(
   organisationId: string,
   actorUserId: string,
   siteId: string,
-  inputs: ItemInput[],
+  inputs: { line: number; item: ItemInput }[],
   meta: { file_name: string; mode: string; skipped_rows: number },
   conn: Conn = getDb(),
 ): Promise<number> {
@@ -182,9 +182,9 @@ export async function importItems(
     const levels: LevelRow[] = await trx('site_levels').where({ site_id: siteId, organisation_id: organisationId });
     const byId = new Map(levels.map((l) => [l.id, l]));
     const ladder = await listLadder(organisationId, trx);
-    const rows = inputs.map((input, i) => {
+    const rows = inputs.map(({ line, item: input }) => {
       const level = byId.get(input.level_id);
-      if (!level) throw new ConflictError(`${i}.level_id`, 'A level named in the file no longer exists: nothing was imported.', 422);
+      if (!level) throw new ConflictError(`line ${line}.level`, 'A level named in the file no longer exists: nothing was imported.', 422);
       const result = computeItem(input, { ...level, altitude_m: site.altitude_m, design_wind_m_s: site.design_wind_m_s, current_m_s: site.current_m_s }, ladder);
       return { ...toRow(input), ...result, computed_at: trx.fn.now(), organisation_id: organisationId, site_id: siteId };
     });

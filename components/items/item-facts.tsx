@@ -16,7 +16,7 @@ export function ItemFacts({ item, units }: { item: ItemDetail; units: UnitSystem
     ['Mass', formatQuantity('mass', item.mass_kg, units)],
     ['Shape', `${SHAPE_LABELS[item.shape as ShapeChoice] ?? item.shape}${dims ? ` (${dims})` : ''}`],
     ['Level', `${item.level_name} (${formatQuantity('length', item.floor_height_m, units)})`],
-    ['Height', item.height_m === null ? `Level floor, ${formatQuantity('length', item.floor_height_m, units)}` : formatQuantity('length', item.height_m, units)],
+    ['Drop height', item.height_m === null ? `Level floor, ${formatQuantity('length', item.floor_height_m, units)}` : formatQuantity('length', item.height_m, units)],
     ['Securing', SECURING_LABELS[item.securing]],
     ['Last inspection', item.last_inspected ?? '—'],
   ];

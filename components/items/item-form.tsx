@@ -66,10 +66,14 @@ export function ItemForm({
         <legend className="mb-2 text-base font-bold">Where it is</legend>
         <SelectField label="Level" options={levelOptions} error={errorFor('level_id')} {...form.register('level_id')} />
         <TextField
-          label="Height"
+          label="Drop height"
           inputMode="decimal"
           suffix={length}
-          hint={level ? `Blank: the level's floor height, ${formatQuantity('length', level.floor_height_m, units)}.` : "Blank: the level's floor height."}
+          hint={
+            level
+              ? `Above the impact surface. Blank: the level's floor height, ${formatQuantity('length', level.floor_height_m, units)}.`
+              : "Above the impact surface. Blank: the level's floor height."
+          }
           error={errorFor('height')}
           {...form.register('height')}
         />

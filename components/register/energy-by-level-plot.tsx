@@ -138,10 +138,12 @@ function buildFigure({ rows, ladder, levels, units }: Props) {
       line: { color: LADDER_COLOURS[l.colour].hex, width: 1.25, dash: 'dash' as const },
     })),
   ];
-  const annotations: Partial<Annotation>[] = bounds.map((l) => ({
+  // Bounds can sit close on a log scale (49 J and 79 J): alternate rows keep their names apart.
+  const annotations: Partial<Annotation>[] = bounds.map((l, i) => ({
     x: Math.log10(E(l.lower_bound_j)),
     y: 1,
     yref: 'paper',
+    yshift: i % 2 ? 14 : 0,
     xanchor: 'left',
     yanchor: 'bottom',
     text: escapeHtml(l.name),
@@ -151,7 +153,7 @@ function buildFigure({ rows, ladder, levels, units }: Props) {
 
   const unit = unitLabel('energy', units);
   const layout: Partial<Layout> = {
-    margin: { l: 16, r: 24, t: 28, b: 100 },
+    margin: { l: 16, r: 24, t: 44, b: 100 },
     xaxis: {
       type: 'log',
       range: [lo, hi],
@@ -159,6 +161,7 @@ function buildFigure({ rows, ladder, levels, units }: Props) {
       gridcolor: C.rule,
       exponentformat: 'none',
       separatethousands: true,
+      dtick: 1,
       zeroline: false,
     },
     yaxis: {

@@ -155,7 +155,7 @@ function useColumns(ladder: ConsequenceLevel[], levels: SiteLevel[], units: Unit
       },
       {
         id: 'height',
-        header: `Height (${unit('length')})`,
+        header: `Drop height (${unit('length')})`,
         accessorFn: (r) => r.height_m,
         sortingFn: 'basic',
         enableGlobalFilter: false,
@@ -413,7 +413,12 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
     columns,
     state: { globalFilter: deferredSearch },
     globalFilterFn: matchesSearch,
-    initialState: { pagination: { pageIndex: 0, pageSize: PAGE_SIZES[0] }, columnVisibility: { shape: false } },
+    initialState: {
+      pagination: { pageIndex: 0, pageSize: PAGE_SIZES[0] },
+      // What decides a barricade first: where it is, how hard it lands and how far it drifts; the rest on demand.
+      columnOrder: ['tag', 'description', 'level', 'height', 'energy', 'consequence', 'fall_time', 'drift', 'securing', 'impact_speed', 'quantity', 'mass', 'category', 'shape', 'last_inspected', 'computed_at'],
+      columnVisibility: { shape: false, category: false, impact_speed: false, mass: false },
+    },
     getRowId: (r) => r.id,
     getCoreRowModel: getCoreRowModel(),
     getFilteredRowModel: getFilteredRowModel(),

@@ -86,7 +86,7 @@ export async function saveLevelAction(_prev: ActionState, form: FormData): Promi
     revalidatePath(`/sites/${siteId}`);
     return { ok: true, message: `Level “${parsed.data.name}” added.` };
   } catch (error) {
-    return known(error, 'level');
+    return known(error, id ? 'level' : 'site');
   }
 }
 
@@ -120,7 +120,7 @@ export async function saveItemAction(_prev: ActionState, form: FormData): Promis
     if (!isUuid(siteId)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
     itemId = (await createItem(member.organisationId, member.userId, siteId, parsed.data)).id;
   } catch (error) {
-    return known(error, 'item');
+    return known(error, id ? 'item' : 'site');
   }
   revalidatePath(`/sites/${siteId}`);
   redirect(`/items/${itemId}?added=1`);

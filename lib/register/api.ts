@@ -1,6 +1,7 @@
 import type { Member } from '@/db/types';
 import { findSite } from '@/db/sites';
 import { NotFoundError } from '@/lib/errors';
+import { badRequest } from '@/lib/http/api';
 import { unitsField } from '@/lib/validation/quantity';
 
 /** Who may change the register; everyone in the organisation may read it. */
@@ -9,7 +10,9 @@ export const EDITORS = ['admin', 'engineer'] as const;
 /** The unit system a JSON body declares, and the body without that key. */
 export function bodyUnits(body: Record<string, unknown>): { units: 'si' | 'us'; rest: Record<string, unknown> } {
   const { units, ...rest } = body;
-  return { units: unitsField.parse(units), rest };
+  const parsed = unitsField.safeParse(units);
+  if (!parsed.success) badRequest('units', 'Units must be "si" or "us".');
+  return { units: parsed.data, rest };
 }
 
 /** A site of the caller's organisation; another organisation's id is simply not found. */

@@ -2,9 +2,8 @@ import { deleteItem, findItem, updateItem } from '@/db/items';
 import { NotFoundError } from '@/lib/errors';
 import { apiRoute, readJsonObject } from '@/lib/http/api';
 import { bodyUnits, EDITORS } from '@/lib/register/api';
-import { itemValues } from '@/lib/register/form-values';
+import { patchedItem } from '@/lib/register/patch';
 import type { Member } from '@/db/types';
-import { itemSchema } from '@/lib/validation/item';
 
 type Params = { id: string };
 
@@ -20,10 +19,7 @@ export const GET = apiRoute<Params>('any', async (_request, { member, params }) 
 export const PATCH = apiRoute<Params>(EDITORS, async (request, { member, params }) => {
   const item = await itemOf(member, params.id);
   const { units, rest } = bodyUnits(await readJsonObject(request));
-  const stored = itemValues(item, units, true);
-  const dimensions = typeof rest.dimensions === 'object' && rest.dimensions !== null ? { ...stored.dimensions, ...rest.dimensions } : stored.dimensions;
-  const input = itemSchema(units).parse({ ...stored, ...rest, dimensions });
-  await updateItem(member.organisationId, member.userId, item.id, input);
+  await updateItem(member.organisationId, member.userId, item.id, patchedItem(item, units, rest));
   return Response.json({ item: await findItem(member.organisationId, item.id) });
 });
 

@@ -2,8 +2,7 @@ import { listLevels } from '@/db/levels';
 import { deleteSite, updateSite } from '@/db/sites';
 import { apiRoute, readJsonObject } from '@/lib/http/api';
 import { bodyUnits, EDITORS, siteOf } from '@/lib/register/api';
-import { siteValues } from '@/lib/register/form-values';
-import { siteSchema } from '@/lib/validation/site';
+import { patchedSite } from '@/lib/register/patch';
 
 type Params = { id: string };
 
@@ -16,8 +15,7 @@ export const GET = apiRoute<Params>('any', async (_request, { member, params }) 
 export const PATCH = apiRoute<Params>(EDITORS, async (request, { member, params }) => {
   const site = await siteOf(member, params.id);
   const { units, rest } = bodyUnits(await readJsonObject(request));
-  const input = siteSchema(units).parse({ ...siteValues(site, units, true), ...rest });
-  const updated = await updateSite(member.organisationId, member.userId, site.id, input);
+  const updated = await updateSite(member.organisationId, member.userId, site.id, patchedSite(site, units, rest));
   return Response.json({ site: updated.site, recomputed_items: updated.recomputed });
 });
 

@@ -58,7 +58,7 @@ export const POST = apiRoute<Params>(EDITORS, async (request, { member, params }
     member.organisationId,
     member.userId,
     site.id,
-    parsed.valid.map((v) => v.item),
+    parsed.valid,
     { file_name: fileName, mode, skipped_rows: parsed.invalid_lines },
   );
   return Response.json({ ...summary, imported });
