@@ -6,8 +6,11 @@ const DIR = 'tests/.artifacts/screens';
 export async function screens(page: Page, name: string): Promise<void> {
   const original = page.viewportSize();
   await page.setViewportSize({ width: 1366, height: 900 });
+  // Plots re-lay themselves out a moment after a resize; a picture taken at once shows the old width.
+  await page.waitForTimeout(500);
   await page.screenshot({ path: `${DIR}/${name}-desktop.png`, fullPage: true });
   await page.setViewportSize({ width: 820, height: 1180 });
+  await page.waitForTimeout(500);
   await page.screenshot({ path: `${DIR}/${name}-tablet.png`, fullPage: true });
   if (original) await page.setViewportSize(original);
 }
