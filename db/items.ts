@@ -3,6 +3,7 @@ import type { RegisterRow } from '@/lib/register/model';
 import type { RegisterExportRow } from '@/lib/register/csv';
 import type { ItemInput } from '@/lib/validation/item';
 import { ConflictError, NotFoundError } from '@/lib/errors';
+import { isUuid } from '@/lib/validation/ids';
 import { appendAudit } from './audit';
 import { listLadder } from './consequence-levels';
 import { getDb } from './knex';
@@ -216,6 +217,7 @@ export interface ItemDetail extends ItemRow {
 }
 
 export async function findItem(organisationId: string, itemId: string, conn: Conn = getDb()): Promise<ItemDetail | undefined> {
+  if (!isUuid(itemId)) return undefined;
   return conn('items as i')
     .join('site_levels as l', 'l.id', 'i.level_id')
     .join('sites as s', 's.id', 'i.site_id')

@@ -1,4 +1,5 @@
 import { NotFoundError, ConflictError } from '@/lib/errors';
+import { isUuid } from '@/lib/validation/ids';
 import type { SiteInput } from '@/lib/validation/site';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';
@@ -71,6 +72,7 @@ export async function listSites(organisationId: string, conn: Conn = getDb()): P
 }
 
 export async function findSite(organisationId: string, siteId: string, conn: Conn = getDb()): Promise<SiteRow | undefined> {
+  if (!isUuid(siteId)) return undefined;
   return conn<SiteRow>('sites').where({ id: siteId, organisation_id: organisationId }).first();
 }
 

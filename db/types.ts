@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import type { ItemCategory, Securing, SiteKind, StoredResult, Surface } from '@/lib/register/model';
 
 export const ROLES = ['admin', 'engineer', 'reviewer', 'viewer'] as const;
 export type Role = (typeof ROLES)[number];
@@ -66,9 +67,9 @@ export interface SiteRow {
   id: string;
   organisation_id: string;
   name: string;
-  kind: import('@/lib/register/model').SiteKind;
+  kind: SiteKind;
   location: string;
-  surface: import('@/lib/register/model').Surface;
+  surface: Surface;
   water_depth_m: number | null;
   altitude_m: number;
   design_wind_m_s: number;
@@ -84,21 +85,22 @@ export interface LevelRow {
   site_id: string;
   name: string;
   floor_height_m: number;
-  surface: import('@/lib/register/model').Surface;
+  surface: Surface;
   water_depth_m: number | null;
   notes: string;
   created_at: Date;
   updated_at: Date;
 }
 
-export interface ItemRow {
+/** An item with its stored result; the database hands back computed_at as a Date. */
+export interface ItemRow extends Omit<StoredResult, 'computed_at'> {
   id: string;
   organisation_id: string;
   site_id: string;
   level_id: string;
   tag: string;
   description: string;
-  category: import('@/lib/register/model').ItemCategory;
+  category: ItemCategory;
   quantity: number;
   mass_kg: number;
   shape: string;
@@ -107,21 +109,11 @@ export interface ItemRow {
   area_m2: number | null;
   volume_m3: number | null;
   height_m: number | null;
-  securing: import('@/lib/register/model').Securing;
+  securing: Securing;
   /** YYYY-MM-DD */
   last_inspected: string | null;
   notes: string;
-  fall_time_s: number | null;
-  impact_speed_m_s: number | null;
-  impact_energy_j: number | null;
-  effective_energy_j: number | null;
-  drift_m: number | null;
-  sinks: boolean | null;
-  consequence_level_id: string | null;
-  model_version: string | null;
-  inputs_hash: string | null;
   computed_at: Date | null;
-  compute_error: string | null;
   created_at: Date;
   updated_at: Date;
 }

@@ -4,20 +4,14 @@ import { useMemo } from 'react';
 import type { Annotation, Data, Layout, Shape } from 'plotly.js';
 import type { UnitSystem } from '@/db/types';
 import { PLOT_COLOURS as C, PlotFrame } from '@/components/calculator/plot-frame';
-import { LADDER_COLOURS, type ConsequenceLevel, type RegisterViewRow } from '@/lib/register/model';
+import { LADDER_COLOURS, type ConsequenceLevel, type RegisterViewRow, type SiteLevelRef } from '@/lib/register/model';
 import { formatQuantity, fromSI, unitLabel } from '@/lib/units';
 import { ladderInOrder } from './ladder';
-
-interface SiteLevel {
-  id: string;
-  name: string;
-  floor_height_m: number;
-}
 
 interface Props {
   rows: RegisterViewRow[];
   ladder: ConsequenceLevel[];
-  levels: SiteLevel[];
+  levels: SiteLevelRef[];
   units: UnitSystem;
 }
 

@@ -24,21 +24,16 @@ import {
   SECURING_LABELS,
   type ConsequenceLevel,
   type RegisterViewRow,
+  type SiteLevelRef,
 } from '@/lib/register/model';
 import { formatQuantity, unitLabel, type Quantity } from '@/lib/units';
 import { ConsequenceBadge } from './consequence-badge';
 import { ladderById, ladderInOrder } from './ladder';
 
-interface SiteLevel {
-  id: string;
-  name: string;
-  floor_height_m: number;
-}
-
 interface Props {
   rows: RegisterViewRow[];
   ladder: ConsequenceLevel[];
-  levels: SiteLevel[];
+  levels: SiteLevelRef[];
   units: UnitSystem;
   /** Editing happens on the item page; the table only links there. */
   canEdit: boolean;
@@ -94,7 +89,7 @@ function noResultReason(row: RegisterViewRow): { text: string; failed: boolean }
   return null;
 }
 
-function useColumns(ladder: ConsequenceLevel[], levels: SiteLevel[], units: UnitSystem): ColumnDef<RegisterViewRow, unknown>[] {
+function useColumns(ladder: ConsequenceLevel[], levels: SiteLevelRef[], units: UnitSystem): ColumnDef<RegisterViewRow, unknown>[] {
   return useMemo(() => {
     const rungs = ladderById(ladder);
     const floor = new Map(levels.map((l) => [l.id, l.floor_height_m]));

@@ -9,6 +9,7 @@ import { createSite, deleteSite, updateSite } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { ladderSchema } from '@/lib/validation/consequence-level';
+import { isUuid } from '@/lib/validation/ids';
 import { formToObject, toFieldErrors } from '@/lib/validation/issues';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
@@ -32,7 +33,6 @@ function read(form: FormData): { values: Record<string, unknown>; units: 'si' | 
   return { values: unflatten(flat), units: units.success ? units.data : 'si', id: flat.id ?? '' };
 }
 
-const isUuid = (s: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(s);
 
 export async function saveSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(EDITORS);

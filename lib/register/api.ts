@@ -17,7 +17,7 @@ export function bodyUnits(body: Record<string, unknown>): { units: 'si' | 'us'; 
 
 /** A site of the caller's organisation; another organisation's id is simply not found. */
 export async function siteOf(member: Member, id: string) {
-  const site = /^[0-9a-f-]{36}$/i.test(id) ? await findSite(member.organisationId, id) : undefined;
+  const site = await findSite(member.organisationId, id);
   if (!site) throw new NotFoundError('No such site');
   return site;
 }

@@ -71,6 +71,13 @@ export const LADDER_COLOURS = {
 export type LadderColour = keyof typeof LADDER_COLOURS;
 export const LADDER_COLOUR_IDS = Object.keys(LADDER_COLOURS) as [LadderColour, ...LadderColour[]];
 
+/** A level as the register's views need it: to name it and order it by height. */
+export interface SiteLevelRef {
+  id: string;
+  name: string;
+  floor_height_m: number;
+}
+
 /** One rung of an organisation's consequence ladder. */
 export interface ConsequenceLevel {
   id: string;

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { DropResults } from '@/components/calculator/drop-results';
-import { DeleteItemButton } from '@/components/items/delete-item-button';
+import { ConfirmForm } from '@/components/forms/confirm-form';
 import { ItemFacts } from '@/components/items/item-facts';
 import { ItemForm } from '@/components/items/item-form';
 import { ItemHistory } from '@/components/items/item-history';
@@ -10,6 +10,7 @@ import { StoredResult } from '@/components/items/stored-result';
 import { listLadder } from '@/db/consequence-levels';
 import { findItem, itemHistory } from '@/db/items';
 import { listLevels } from '@/db/levels';
+import { deleteItemAction } from '@/lib/actions/register';
 import { requireRole } from '@/lib/auth';
 import { simulateDrop } from '@/lib/physics';
 import { inputsHash, itemDropCase } from '@/lib/register/compute';
@@ -18,7 +19,6 @@ import { SURFACE_LABELS } from '@/lib/register/model';
 
 export const metadata: Metadata = { title: 'Item at height' };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const PLOT_SAMPLES = 240;
 
 /** The stored result could not have been computed here; the detail view runs the same case again with plot samples. */
@@ -34,7 +34,7 @@ function detail(item: NonNullable<Awaited<ReturnType<typeof findItem>>>) {
 export default async function ItemPage({ params, searchParams }: { params: Promise<{ itemId: string }>; searchParams: Promise<{ added?: string }> }) {
   const member = await requireRole('any');
   const [{ itemId }, query] = await Promise.all([params, searchParams]);
-  const item = UUID.test(itemId) ? await findItem(member.organisationId, itemId) : undefined;
+  const item = await findItem(member.organisationId, itemId);
   if (!item) notFound();
   const canEdit = member.role === 'admin' || member.role === 'engineer';
   const units = member.unitSystem;
@@ -95,7 +95,11 @@ export default async function ItemPage({ params, searchParams }: { params: Promi
         <ItemHistory rows={history} />
       </section>
 
-      {canEdit ? <DeleteItemButton id={item.id} siteId={item.site_id} tag={item.tag} /> : null}
+      {canEdit ? (
+        <ConfirmForm action={deleteItemAction} fields={{ id: item.id, site_id: item.site_id }} question={`Delete ${item.tag} from the register?`}>
+          Delete this item
+        </ConfirmForm>
+      ) : null}
     </div>
   );
 }

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { DeleteSiteButton } from '@/components/sites/delete-site-button';
+import { ConfirmForm } from '@/components/forms/confirm-form';
 import { LevelForm } from '@/components/sites/level-form';
 import { LevelList } from '@/components/sites/level-list';
 import { SiteForm } from '@/components/sites/site-form';
@@ -11,6 +11,7 @@ import { listLadder } from '@/db/consequence-levels';
 import { listRegister } from '@/db/items';
 import { listLevels } from '@/db/levels';
 import { findSite } from '@/db/sites';
+import { deleteSiteAction } from '@/lib/actions/register';
 import { requireRole } from '@/lib/auth';
 import { levelValues, siteValues } from '@/lib/register/form-values';
 import { SITE_KIND_LABELS, SURFACE_LABELS, toViewRow } from '@/lib/register/model';
@@ -18,13 +19,12 @@ import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Site register' };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const button = 'rounded-md px-4 py-2 text-sm font-semibold';
 
 export default async function SitePage({ params }: { params: Promise<{ siteId: string }> }) {
   const member = await requireRole('any');
   const { siteId } = await params;
-  const site = UUID.test(siteId) ? await findSite(member.organisationId, siteId) : undefined;
+  const site = await findSite(member.organisationId, siteId);
   if (!site) notFound();
   const [levels, rows, ladder] = await Promise.all([
     listLevels(member.organisationId, site.id),
@@ -99,7 +99,13 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
             <SiteForm id={site.id} initial={siteValues(site, units)} units={units} />
           </div>
           <div className="mt-6 border-t border-paper-rule pt-4">
-            <DeleteSiteButton id={site.id} name={site.name} lines={rows.length} />
+            <ConfirmForm
+              action={deleteSiteAction}
+              fields={{ id: site.id }}
+              question={`Delete the site ${site.name}${rows.length ? ` and its ${rows.length} register line(s)` : ''}? This cannot be undone.`}
+            >
+              Delete this site
+            </ConfirmForm>
           </div>
         </details>
       ) : null}

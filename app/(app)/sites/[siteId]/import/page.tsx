@@ -9,12 +9,11 @@ import { EDITORS } from '@/lib/register/api';
 
 export const metadata: Metadata = { title: 'Import items' };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function ImportPage({ params }: { params: Promise<{ siteId: string }> }) {
   const member = await requireRole(EDITORS);
   const { siteId } = await params;
-  const site = UUID.test(siteId) ? await findSite(member.organisationId, siteId) : undefined;
+  const site = await findSite(member.organisationId, siteId);
   if (!site) notFound();
   const levels = await listLevels(member.organisationId, site.id);
   return (

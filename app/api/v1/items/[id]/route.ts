@@ -8,7 +8,7 @@ import type { Member } from '@/db/types';
 type Params = { id: string };
 
 async function itemOf(member: Member, id: string) {
-  const item = /^[0-9a-f-]{36}$/i.test(id) ? await findItem(member.organisationId, id) : undefined;
+  const item = await findItem(member.organisationId, id);
   if (!item) throw new NotFoundError('No such item');
   return item;
 }

@@ -12,7 +12,6 @@ import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'New item' };
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function NewItemPage({
   params,
@@ -23,7 +22,7 @@ export default async function NewItemPage({
 }) {
   const member = await requireRole(EDITORS);
   const [{ siteId }, query] = await Promise.all([params, searchParams]);
-  const site = UUID.test(siteId) ? await findSite(member.organisationId, siteId) : undefined;
+  const site = await findSite(member.organisationId, siteId);
   if (!site) notFound();
   const levels = await listLevels(member.organisationId, site.id);
   const fromCalculator = query.from === 'calculator';
