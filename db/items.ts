@@ -237,12 +237,19 @@ export async function findItem(organisationId: string, itemId: string, conn: Con
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
-function registerQuery(conn: Conn, organisationId: string, siteId: string) {
+/** The columns a register line shows; an export also wants the inputs it does not show. */
+const LINE_COLUMNS = [
+  'id', 'tag', 'description', 'category', 'quantity', 'mass_kg', 'shape', 'level_id', 'height_m', 'securing', 'last_inspected', 'updated_at',
+  ...RESULT_COLUMNS,
+  'computed_at',
+].map((c) => `i.${c}`);
+
+function registerQuery(conn: Conn, organisationId: string, siteId: string, columns: string[] = LINE_COLUMNS) {
   return conn('items as i')
     .join('site_levels as l', 'l.id', 'i.level_id')
     .where({ 'i.site_id': siteId, 'i.organisation_id': organisationId })
     .orderBy([{ column: 'l.floor_height_m', order: 'desc' }, { column: 'i.tag' }])
-    .select('i.*', 'l.name as level_name', 'l.floor_height_m');
+    .select(...columns, 'l.name as level_name', 'l.floor_height_m');
 }
 
 function toRegisterRow(r: ItemRow & { level_name: string; floor_height_m: number }): RegisterRow {
@@ -281,7 +288,7 @@ export async function listRegister(organisationId: string, siteId: string, conn:
 }
 
 export async function listRegisterForExport(organisationId: string, siteId: string, conn: Conn = getDb()): Promise<RegisterExportRow[]> {
-  const rows = await registerQuery(conn, organisationId, siteId);
+  const rows = await registerQuery(conn, organisationId, siteId, ['i.*']);
   return rows.map((r: ItemRow & { level_name: string; floor_height_m: number }) => ({
     ...toRegisterRow(r),
     dimensions_m: r.dimensions_m,

@@ -1,28 +1,18 @@
 'use client';
 
+import { useMemo } from 'react';
 import { EnergyByLevelPlot } from '@/components/register/energy-by-level-plot';
 import { RegisterTable } from '@/components/register/register-table';
 import type { UnitSystem } from '@/db/types';
-import type { ConsequenceLevel, RegisterViewRow } from '@/lib/register/model';
+import { unpackRegister, type ConsequenceLevel, type PackedRegister } from '@/lib/register/model';
 
-/** The plot and the table share one copy of the rows: a site of thousands of items crosses the wire once. */
-export function SiteRegisterView({
-  rows,
-  ladder,
-  levels,
-  units,
-  canEdit,
-}: {
-  rows: RegisterViewRow[];
-  ladder: ConsequenceLevel[];
-  levels: { id: string; name: string; floor_height_m: number }[];
-  units: UnitSystem;
-  canEdit: boolean;
-}) {
+/** The plot and the table share one packed copy of the rows: a site of thousands of items crosses the wire once. */
+export function SiteRegisterView({ packed, ladder, units, canEdit }: { packed: PackedRegister; ladder: ConsequenceLevel[]; units: UnitSystem; canEdit: boolean }) {
+  const rows = useMemo(() => unpackRegister(packed), [packed]);
   return (
     <>
-      {rows.length ? <EnergyByLevelPlot rows={rows} ladder={ladder} levels={levels} units={units} /> : null}
-      <RegisterTable rows={rows} ladder={ladder} levels={levels} units={units} canEdit={canEdit} />
+      {rows.length ? <EnergyByLevelPlot rows={rows} ladder={ladder} levels={packed.levels} units={units} /> : null}
+      <RegisterTable rows={rows} ladder={ladder} levels={packed.levels} units={units} canEdit={canEdit} />
     </>
   );
 }

@@ -14,7 +14,7 @@ import { findSite } from '@/db/sites';
 import { deleteSiteAction } from '@/lib/actions/register';
 import { requireRole } from '@/lib/auth';
 import { levelValues, siteValues } from '@/lib/register/form-values';
-import { SITE_KIND_LABELS, SURFACE_LABELS, toViewRow } from '@/lib/register/model';
+import { SITE_KIND_LABELS, SURFACE_LABELS, packRegister } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Site register' };
@@ -74,7 +74,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
       </header>
 
       <SummaryStrip rows={rows} ladder={ladder} units={units} />
-      <SiteRegisterView rows={rows.map(toViewRow)} ladder={ladder} levels={levels.map(({ id, name, floor_height_m }) => ({ id, name, floor_height_m }))} units={units} canEdit={canEdit} />
+      <SiteRegisterView packed={packRegister(rows, levels, ladder)} ladder={ladder} units={units} canEdit={canEdit} />
 
       <section className="rounded-card bg-paper-raised p-5 shadow-card" aria-labelledby="levels-heading">
         <h2 id="levels-heading" className="mb-2 text-lg font-bold">
