@@ -9,7 +9,8 @@ import { listLadder } from './consequence-levels';
 import { getDb } from './knex';
 import type { AuditRow, Conn, ItemRow, LevelRow, SiteRow } from './types';
 
-const RESULT_COLUMNS = [
+/** The stored result's columns, written together whenever an item's fall is computed. */
+export const RESULT_COLUMNS = [
   'fall_time_s',
   'impact_speed_m_s',
   'impact_energy_j',

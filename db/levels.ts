@@ -32,10 +32,6 @@ export async function listLevels(organisationId: string, siteId: string, conn: C
   return rows.map((r) => ({ ...r, line_count: Number(r.line_count) }));
 }
 
-export async function findLevel(organisationId: string, levelId: string, conn: Conn = getDb()): Promise<LevelRow | undefined> {
-  return conn<LevelRow>('site_levels').where({ id: levelId, organisation_id: organisationId }).first();
-}
-
 export async function createLevel(organisationId: string, actorUserId: string, siteId: string, input: LevelInput, conn: Conn = getDb()): Promise<LevelRow> {
   return conn.transaction(async (trx) => {
     const site = await trx('sites').where({ id: siteId, organisation_id: organisationId }).forShare().first('id');

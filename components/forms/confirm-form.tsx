@@ -7,7 +7,22 @@ import { idle } from '@/lib/actions/state';
 type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
 
 /** A one-button form for a destructive action: asks first, posts its hidden fields, shows a refusal under the button. */
-export function ConfirmForm({ action, fields, question, children }: { action: Action; fields: Record<string, string>; question: string; children: ReactNode }) {
+export function ConfirmForm({
+  action,
+  fields,
+  question,
+  children,
+  small = false,
+  disabledWhy,
+}: {
+  action: Action;
+  fields: Record<string, string>;
+  question: string;
+  children: ReactNode;
+  small?: boolean;
+  /** Set when the action cannot apply now; shown as the button's tooltip. */
+  disabledWhy?: string;
+}) {
   const [state, formAction, pending] = useActionState(action, idle);
   return (
     <form
@@ -22,8 +37,9 @@ export function ConfirmForm({ action, fields, question, children }: { action: Ac
       ))}
       <button
         type="submit"
-        disabled={pending}
-        className="rounded-md border border-flare-500 bg-paper-raised px-4 py-2 text-sm font-semibold text-flare-700 hover:bg-flare-50 disabled:opacity-60"
+        disabled={pending || Boolean(disabledWhy)}
+        title={disabledWhy}
+        className={`rounded-md border border-flare-500 bg-paper-raised text-sm font-semibold text-flare-700 hover:bg-flare-50 disabled:cursor-not-allowed disabled:opacity-40 ${small ? 'px-3 py-1' : 'px-4 py-2'}`}
       >
         {children}
       </button>

@@ -1,9 +1,9 @@
 'use client';
 
-import { useActionState, useState } from 'react';
+import { useState } from 'react';
+import { ConfirmForm } from '@/components/forms/confirm-form';
 import type { UnitSystem } from '@/db/types';
 import { deleteLevelAction } from '@/lib/actions/register';
-import { idle } from '@/lib/actions/state';
 import type { LevelValues } from '@/lib/register/form-values';
 import { SURFACE_LABELS, type Surface } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
@@ -22,7 +22,6 @@ export interface LevelEntry {
 
 function LevelRowView({ siteId, level, units, canEdit }: { siteId: string; level: LevelEntry; units: UnitSystem; canEdit: boolean }) {
   const [editing, setEditing] = useState(false);
-  const [state, action, pending] = useActionState(deleteLevelAction, idle);
   return (
     <li className="border-t border-paper-rule py-3 first:border-t-0">
       <div className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
@@ -51,31 +50,18 @@ function LevelRowView({ siteId, level, units, canEdit }: { siteId: string; level
               {editing ? 'Close' : 'Edit'}
               <span className="sr-only"> level {level.name}</span>
             </button>
-            <form
-              action={action}
-              onSubmit={(e) => {
-                if (!window.confirm(`Delete the level ${level.name}?`)) e.preventDefault();
-              }}
+            <ConfirmForm
+              action={deleteLevelAction}
+              fields={{ id: level.id, site_id: siteId }}
+              question={`Delete the level ${level.name}?`}
+              small
+              disabledWhy={level.line_count > 0 ? 'Move or delete its items first' : undefined}
             >
-              <input type="hidden" name="id" value={level.id} />
-              <input type="hidden" name="site_id" value={siteId} />
-              <button
-                type="submit"
-                disabled={pending || level.line_count > 0}
-                title={level.line_count > 0 ? 'Move or delete its items first' : undefined}
-                className="rounded-md border border-flare-500 px-3 py-1 text-sm font-semibold text-flare-700 hover:bg-flare-50 disabled:cursor-not-allowed disabled:opacity-40"
-              >
-                Delete<span className="sr-only"> level {level.name}</span>
-              </button>
-            </form>
+              Delete<span className="sr-only"> level {level.name}</span>
+            </ConfirmForm>
           </span>
         ) : null}
       </div>
-      {state.message && !state.ok ? (
-        <p role="alert" className="mt-1 text-sm text-flare-700">
-          {state.message}
-        </p>
-      ) : null}
       {editing ? (
         <div className="mt-3 rounded-md bg-paper p-3">
           <LevelForm siteId={siteId} id={level.id} initial={level.values} units={units} />

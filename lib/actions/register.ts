@@ -7,6 +7,7 @@ import { createItem, deleteItem, updateItem } from '@/db/items';
 import { createLevel, deleteLevel, updateLevel } from '@/db/levels';
 import { createSite, deleteSite, updateSite } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
+import { EDITORS } from '@/lib/register/api';
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { isUuid } from '@/lib/validation/ids';
@@ -17,7 +18,6 @@ import { unflatten, unitsField } from '@/lib/validation/quantity';
 import { siteSchema } from '@/lib/validation/site';
 import type { ActionState } from './state';
 
-const EDITORS = ['admin', 'engineer'] as const;
 const CHECK = 'Check the highlighted fields.';
 
 function known(error: unknown, what: string): ActionState {

@@ -8,7 +8,7 @@ import type { ConsequenceLevel } from './model';
 export const DEFAULT_LADDER: readonly Omit<ConsequenceLevel, 'id'>[] = [
   {
     rank: 1,
-    name: 'Minor strike',
+    name: 'Under debris threshold',
     lower_bound_j: 0,
     colour: 'haze',
     guidance: 'Good housekeeping and tool tethering where practical; hard hats in the area as site rules require.',

@@ -1,13 +1,13 @@
 import { z } from 'zod';
 import { LADDER_COLOUR_IDS } from '@/lib/register/model';
-import { enumField, optionalText, quantityField, textField } from './quantity';
+import { enumField, quantityField, textField } from './quantity';
 
 const rung = z.object({
   name: textField('Name', 60, 1),
   lower_bound_j: quantityField({ label: 'Lower bound', quantity: 'energy', min: 0, max: 1e9 }, 'si', true),
   colour: enumField(LADDER_COLOUR_IDS, `Colour must be one of: ${LADDER_COLOUR_IDS.join(', ')}.`),
-  guidance: optionalText('Guidance', 1000),
-  source: optionalText('Source', 300),
+  guidance: textField('Guidance', 1000),
+  source: textField('Source', 300),
 });
 
 /**

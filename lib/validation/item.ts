@@ -3,7 +3,7 @@ import type { UnitSystem } from '@/db/types';
 import { DIMENSIONS, RULES, SHAPE_CHOICES, dimensionsOf, type ShapeChoice } from '@/lib/calculator/form';
 import { PhysicsInputError, shapeProperties } from '@/lib/physics';
 import { ITEM_CATEGORIES, SECURING } from '@/lib/register/model';
-import { enumField, optionalText, quantityField, textField } from './quantity';
+import { enumField, quantityField, textField } from './quantity';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 
@@ -50,7 +50,7 @@ export function itemSchema(units: UnitSystem) {
       height: quantityField({ label: 'Height', quantity: 'length', min: 0, max: 10_000 }, units, false),
       securing: enumField(SECURING, `Securing must be one of: ${SECURING.join(', ')}.`),
       last_inspected: inspectionDate(),
-      notes: optionalText('Notes', 2000),
+      notes: textField('Notes', 2000),
     })
     .superRefine((item, ctx) => {
       const shape = item.shape as ShapeChoice;

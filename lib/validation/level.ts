@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { UnitSystem } from '@/db/types';
 import { SURFACES } from '@/lib/register/model';
-import { enumField, optionalText, quantityField, textField } from './quantity';
+import { enumField, quantityField, textField } from './quantity';
 import { WATER_DEPTH } from './site';
 
 export const FLOOR_HEIGHT = { label: 'Floor height', quantity: 'length', min: 0, max: 10_000 } as const;
@@ -14,7 +14,7 @@ export function levelSchema(units: UnitSystem) {
       floor_height: quantityField(FLOOR_HEIGHT, units, true),
       surface: enumField(SURFACES, 'What is below must be ground, deck or water.'),
       water_depth: quantityField(WATER_DEPTH, units, false),
-      notes: optionalText('Notes', 2000),
+      notes: textField('Notes', 2000),
     })
     .superRefine((l, ctx) => {
       if (l.surface === 'water' && l.water_depth === undefined) {

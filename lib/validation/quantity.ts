@@ -72,7 +72,7 @@ export function quantityField(rule: QuantityRule, units: UnitSystem, required: b
   }) as z.ZodType<number | undefined, unknown>;
 }
 
-/** Trimmed text with a length limit; blank is allowed unless a minimum is given. */
+/** Trimmed text with a length limit; absent or blank is allowed (read as '') unless a minimum is given. */
 export function textField(label: string, max: number, min = 0) {
   return z.preprocess(
     (v) => (v === undefined || v === null ? '' : v),
@@ -82,11 +82,6 @@ export function textField(label: string, max: number, min = 0) {
       .min(min, min === 1 ? `${label} is required.` : `${label} must be at least ${min} characters.`)
       .max(max, `${label} must be at most ${max} characters.`),
   );
-}
-
-/** Text that may be absent (undefined or null) in JSON, read as an empty string. */
-export function optionalText(label: string, max: number) {
-  return textField(label, max);
 }
 
 export function enumField<const T extends readonly [string, ...string[]]>(values: T, message: string) {

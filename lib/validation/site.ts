@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { UnitSystem } from '@/db/types';
 import { SITE_KINDS, SURFACES } from '@/lib/register/model';
-import { enumField, optionalText, quantityField, textField } from './quantity';
+import { enumField, quantityField, textField } from './quantity';
 
 /** Limits shared with levels: the ISA model's range, and what a dropped-object survey can meet. */
 export const WATER_DEPTH = { label: 'Water depth', quantity: 'length', min: 0, max: 4000, exclusiveMin: true } as const;
@@ -12,13 +12,13 @@ export function siteSchema(units: UnitSystem) {
     .object({
       name: textField('Site name', 120, 1),
       kind: enumField(SITE_KINDS, 'Kind must be one of: building, crane, wind turbine, offshore deck, bridge, other.'),
-      location: optionalText('Location', 200),
+      location: textField('Location', 200),
       surface: enumField(SURFACES, 'What is below must be ground, deck or water.'),
       water_depth: quantityField(WATER_DEPTH, units, false),
       altitude: quantityField({ label: 'Site altitude', quantity: 'length', min: -500, max: 11_019 }, units, false).transform((v) => v ?? 0),
       design_wind: quantityField({ label: 'Design wind speed', quantity: 'speed', min: 0, max: 70 }, units, true),
       current: quantityField({ label: 'Current', quantity: 'speed', min: 0, max: 5 }, units, false).transform((v) => v ?? 0),
-      notes: optionalText('Notes', 2000),
+      notes: textField('Notes', 2000),
     })
     .superRefine((s, ctx) => {
       if (s.surface === 'water' && s.water_depth === undefined) {
@@ -28,5 +28,3 @@ export function siteSchema(units: UnitSystem) {
     .transform((s) => ({ ...s, water_depth: s.surface === 'water' ? (s.water_depth ?? null) : null }));
 }
 export type SiteInput = z.output<ReturnType<typeof siteSchema>>;
-/** PATCH: any subset of the fields, checked as a whole after merging with what is stored. */
-export type SiteFormValues = Record<keyof SiteInput, string>;

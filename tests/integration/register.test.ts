@@ -7,7 +7,7 @@ import { POST as postLevel } from '@/app/api/v1/sites/[id]/levels/route';
 import { POST as postItem } from '@/app/api/v1/sites/[id]/items/route';
 import { POST as importRoute } from '@/app/api/v1/sites/[id]/items/import/route';
 import { listLadder } from '@/db/consequence-levels';
-import { createItem, findItem } from '@/db/items';
+import { createItem, findItem, RESULT_COLUMNS } from '@/db/items';
 import { createLevel } from '@/db/levels';
 import { getDb } from '@/db/knex';
 import { createSite } from '@/db/sites';
@@ -35,18 +35,6 @@ async function call<P>(handler: Handler<P>, method: string, body: unknown, param
 
 const paths = (json: Json): string[] => (json.errors ?? []).map((e: { path: string }) => e.path);
 
-const RESULT_FIELDS = [
-  'fall_time_s',
-  'impact_speed_m_s',
-  'impact_energy_j',
-  'effective_energy_j',
-  'drift_m',
-  'sinks',
-  'consequence_level_id',
-  'model_version',
-  'inputs_hash',
-  'compute_error',
-] as const;
 const INPUT_FIELDS = [
   'tag',
   'description',
@@ -150,8 +138,8 @@ describe('site → level → item through the API stores the physics core’s re
     const ladder = (await call(getLadder, 'GET', undefined, {})).json.levels as ConsequenceLevel[];
     const expected = computeItem(physics, setting, ladder);
     const stored = await storedItem(json.item.id);
-    expect(only(stored, RESULT_FIELDS)).toEqual(expected);
-    expect(only(json.item, RESULT_FIELDS)).toEqual(expected);
+    expect(only(stored, RESULT_COLUMNS)).toEqual(expected);
+    expect(only(json.item, RESULT_COLUMNS)).toEqual(expected);
     expect(stored.inputs_hash).toBe(inputsHash(itemDropCase(physics, setting)));
     expect(stored.compute_error).toBeNull();
     expect(stored.computed_at).toBeInstanceOf(Date);
@@ -185,7 +173,7 @@ describe('site → level → item through the API stores the physics core’s re
     const physics: ItemPhysics = { mass_kg: 9, shape: 'disc', dimensions_m: { diameter: 0.4, thickness: 0.05 }, cd: null, area_m2: null, volume_m3: null, height_m: null };
     const setting: FallSetting = { floor_height_m: 25, surface: 'water', water_depth_m: 80, altitude_m: 0, design_wind_m_s: 15, current_m_s: 1 };
     const stored = await storedItem(id);
-    expect(only(stored, RESULT_FIELDS)).toEqual(computeItem(physics, setting, await listLadder(org.id)));
+    expect(only(stored, RESULT_COLUMNS)).toEqual(computeItem(physics, setting, await listLadder(org.id)));
     expect(stored.inputs_hash).toBe(inputsHash(itemDropCase(physics, setting)));
     expect(stored.sinks).toBe(true);
   });
@@ -218,7 +206,7 @@ describe('recomputation when what a fall depends on changes', () => {
       expect(after.drift_m).not.toBe(before[i].drift_m);
       expect(after.inputs_hash).not.toBe(before[i].inputs_hash);
       // Against the physics core run here on the stored inputs: this checks the storage, not the physics.
-      expect(only(after, RESULT_FIELDS)).toEqual(await freshResult(id));
+      expect(only(after, RESULT_COLUMNS)).toEqual(await freshResult(id));
     }
   });
 
@@ -229,9 +217,9 @@ describe('recomputation when what a fall depends on changes', () => {
 
     const moved = await storedItem(onUpper);
     expect(moved.fall_time_s).not.toBe(before[onUpper].fall_time_s);
-    expect(only(moved, RESULT_FIELDS)).toEqual(await freshResult(onUpper));
+    expect(only(moved, RESULT_COLUMNS)).toEqual(await freshResult(onUpper));
 
-    expect(only(await storedItem(overridden), RESULT_FIELDS)).toEqual(only(before[overridden], RESULT_FIELDS));
+    expect(only(await storedItem(overridden), RESULT_COLUMNS)).toEqual(only(before[overridden], RESULT_COLUMNS));
     expect(await storedItem(onLower)).toEqual(before[onLower]);
   });
 
@@ -241,7 +229,7 @@ describe('recomputation when what a fall depends on changes', () => {
     const after = await storedItem(overridden);
     expect(after.drift_m).not.toBe(before.drift_m);
     expect(after.height_m).toBe(50);
-    expect(only(after, RESULT_FIELDS)).toEqual(await freshResult(overridden));
+    expect(only(after, RESULT_COLUMNS)).toEqual(await freshResult(overridden));
   });
 });
 
@@ -510,7 +498,7 @@ describe('US units', () => {
     expect(item.height_m).toBeCloseTo(30.48, 12);
     expect(item.dimensions_m.length).toBeCloseTo(0.6096, 12);
     expect(item.dimensions_m.width).toBeCloseTo(0.0381, 12);
-    expect(only(item, RESULT_FIELDS)).toEqual(await freshResult(id));
+    expect(only(item, RESULT_COLUMNS)).toEqual(await freshResult(id));
   });
 });
 
@@ -539,7 +527,7 @@ describe('PATCH with a subset of the fields', () => {
     const after = await storedItem(itemId);
     expect(after.description).toBe('Torque wrench, relabelled');
     expect(only(after, INPUT_FIELDS)).toEqual({ ...only(before, INPUT_FIELDS), description: 'Torque wrench, relabelled' });
-    expect(only(after, RESULT_FIELDS)).toEqual(only(before, RESULT_FIELDS));
+    expect(only(after, RESULT_COLUMNS)).toEqual(only(before, RESULT_COLUMNS));
   });
 
   it('merges one dimension and keeps the other', async () => {

@@ -33,8 +33,8 @@ describe('the default ladder sits at published reference energies', () => {
 
 describe('classification', () => {
   it('puts an energy on the level whose bound is the highest at or below it', () => {
-    expect(classify(0, LADDER)).toBe('Minor strike');
-    expect(classify(14.89, LADDER)).toBe('Minor strike');
+    expect(classify(0, LADDER)).toBe('Under debris threshold');
+    expect(classify(14.89, LADDER)).toBe('Under debris threshold');
     expect(classify(14.9, LADDER)).toBe('Injury possible');
     expect(classify(49, LADDER)).toBe('Beyond helmet test');
     expect(classify(78.99, LADDER)).toBe('Beyond helmet test');

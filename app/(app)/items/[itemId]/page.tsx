@@ -16,6 +16,7 @@ import { simulateDrop } from '@/lib/physics';
 import { inputsHash, itemDropCase } from '@/lib/register/compute';
 import { itemValues } from '@/lib/register/form-values';
 import { SURFACE_LABELS } from '@/lib/register/model';
+import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Item at height' };
 
@@ -46,7 +47,10 @@ export default async function ItemPage({ params, searchParams }: { params: Promi
   const level = ladder.find((l) => l.id === item.consequence_level_id) ?? null;
   const upToDate = item.inputs_hash === inputsHash(itemDropCase(item, item));
   const computed = detail(item);
-  const path = item.surface === 'water' ? `over the sea, ${item.water_depth_m} m deep` : `over ${SURFACE_LABELS[item.surface].toLowerCase()}`;
+  const path =
+    item.surface === 'water' && item.water_depth_m !== null
+      ? `over the sea, ${formatQuantity('length', item.water_depth_m, units)} deep`
+      : `over ${SURFACE_LABELS[item.surface].toLowerCase()}`;
 
   return (
     <div className="flex flex-col gap-6">
