@@ -13,6 +13,7 @@ trap cleanup INT TERM EXIT
 
 load_env_file
 ensure_node_modules
+bundle_entries
 SESSION_SECRET="$(node -e 'process.stdout.write(require("crypto").randomBytes(32).toString("base64url"))')"
 export SESSION_SECRET
 unset DATABASE_URL

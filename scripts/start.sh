@@ -18,6 +18,7 @@ trap cleanup INT TERM EXIT
 
 load_env_file
 ensure_node_modules
+bundle_entries
 ensure_session_secret
 if [ -n "${DATABASE_URL:-}" ]; then
   log "using the external database from DATABASE_URL"

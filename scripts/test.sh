@@ -8,6 +8,7 @@ trap cleanup INT TERM EXIT
 
 load_env_file
 ensure_node_modules
+bundle_entries
 if [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
 SESSION_SECRET="$(node -e 'process.stdout.write(require("crypto").randomBytes(32).toString("base64url"))')"
 export SESSION_SECRET

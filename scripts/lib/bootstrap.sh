@@ -38,6 +38,11 @@ ensure_node_modules() {
   fi
 }
 
+# Worker-thread and command-line entry points run outside Next's build: bundle them into .build/.
+bundle_entries() {
+  node scripts/bundle.mjs || die "bundling the worker and command-line entry points failed"
+}
+
 pg_bin_dir() {
   ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -1
 }
