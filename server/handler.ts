@@ -3,12 +3,13 @@ import type { ServerResponse } from 'node:http';
 import type { Logger } from 'pino';
 import { formatBytes } from '@/lib/http/limits';
 import { SERVER_FAULT } from '@/lib/http/messages';
-import { CLIENT_ADDRESS_HEADER, CSP_HEADER, REQUEST_ID_HEADER } from '@/lib/http/header-names';
+import { REQUEST_ID_HEADER } from '@/lib/http/header-names';
 import { checkFetchAction, checkFormPost, foreignOrigin, type ActionProblem } from './action-check';
 import type { ActionIndex } from './actions';
 import { clientAddressOf } from './client-address';
 import type { GuardedRequest } from './guarded-request';
 import { bodyLimit } from './limits';
+import { firstHeader, setRequestHeaders } from './request-headers';
 import { requestIdFor } from './request-id';
 import { guardResponse } from './response-guard';
 import { API_POLICY, newNonce, pagePolicy, securityHeaders } from './security-headers';
@@ -29,29 +30,6 @@ export const requestScope = new AsyncLocalStorage<{ requestId: string }>();
 /** How long a refused upload's connection stays half-open, unread, so the client sees the 413 before it is cut. */
 const REFUSAL_LINGER_MS = 1000;
 
-/** Claims a client could make that only a trusted proxy may: gone unless TRUST_PROXY_HOPS says proxies are in front. */
-const PROXY_HEADERS = ['x-forwarded-for', 'x-forwarded-host', 'x-forwarded-proto', 'x-forwarded-port', 'forwarded', 'x-real-ip'];
-/** Set only by this server, whatever a client sent under these names. */
-const OWN_HEADERS = [REQUEST_ID_HEADER, CLIENT_ADDRESS_HEADER, CSP_HEADER, `${CSP_HEADER}-report-only`];
-
-function header(req: GuardedRequest, name: string): string | undefined {
-  const value = req.headers[name];
-  return Array.isArray(value) ? value[0] : value;
-}
-
-/** Replaces request headers before Next reads them, in both the parsed object and the raw list it was built from. */
-function rewriteHeaders(req: GuardedRequest, drop: string[], set: Record<string, string>): void {
-  const gone = new Set([...drop, ...Object.keys(set)]);
-  for (const name of gone) delete req.headers[name];
-  Object.assign(req.headers, set);
-  const raw: string[] = [];
-  for (let i = 0; i + 1 < req.rawHeaders.length; i += 2) {
-    if (!gone.has(req.rawHeaders[i].toLowerCase())) raw.push(req.rawHeaders[i], req.rawHeaders[i + 1]);
-  }
-  for (const [name, value] of Object.entries(set)) raw.push(name, value);
-  req.rawHeaders = raw;
-}
-
 /**
  * The server's part of every request, before and around Next: an id and the caller's address on the request, security
  * headers on the answer, body limits, checks of server-action bodies, and one log line when the answer is done.
@@ -63,10 +41,10 @@ export function createHandler(options: HandlerOptions) {
 
   return function handle(req: GuardedRequest, res: ServerResponse, expectsContinue = false): void {
     const started = performance.now();
-    const id = requestIdFor(header(req, REQUEST_ID_HEADER), hops);
+    const id = requestIdFor(firstHeader(req, REQUEST_ID_HEADER), hops);
     const address = clientAddressOf(req.socket.remoteAddress, req.headers['x-forwarded-for'], hops);
     const rawPath = (req.url ?? '/').split('?')[0];
-    const actionId = header(req, 'next-action');
+    const actionId = firstHeader(req, 'next-action');
     const actionName = actionId ? actions.names.get(actionId) : undefined;
 
     res.once('close', () => {
@@ -109,7 +87,6 @@ export function createHandler(options: HandlerOptions) {
     try {
       path = decodeURIComponent(rawPath);
     } catch {
-      rewriteHeaders(req, [...OWN_HEADERS], {});
       answer(400, 'The address has a malformed percent-escape.');
       return;
     }
@@ -120,23 +97,18 @@ export function createHandler(options: HandlerOptions) {
     // Next's own client asks for its flight format and reads a failed action's error from it; others get JSON.
     const nextClient = String(req.headers.accept ?? '').includes('text/x-component');
 
-    const own: Record<string, string> = { [REQUEST_ID_HEADER]: id, [CLIENT_ADDRESS_HEADER]: address };
-    if (api) {
-      res.setHeader('Content-Security-Policy', API_POLICY);
-    } else {
-      const policy = pagePolicy(newNonce());
-      res.setHeader('Content-Security-Policy', policy);
-      own[CSP_HEADER] = policy;
-    }
-    rewriteHeaders(req, hops > 0 ? OWN_HEADERS : [...OWN_HEADERS, ...PROXY_HEADERS], own);
+    const policy = api ? null : pagePolicy(newNonce());
+    res.setHeader('Content-Security-Policy', policy ?? API_POLICY);
+    setRequestHeaders(req, { id, address, policy }, hops);
     guardResponse(res, {
       noStore: api,
       serverErrorBody: api || (isAction && !nextClient) ? JSON.stringify({ error: SERVER_FAULT, request_id: id }) : null,
     });
 
     const limit = bodyLimit(path, actionId, actions);
+    const tooLarge = () => answer(413, `The request body is larger than the ${formatBytes(limit)} this address accepts.`, true);
     if (Number(req.headers['content-length'] ?? 0) > limit) {
-      answer(413, `The request body is larger than the ${formatBytes(limit)} this address accepts.`, true);
+      tooLarge();
       return;
     }
     const origin = isAction || isFormPost ? foreignOrigin(req.headers) : null;
@@ -160,7 +132,7 @@ export function createHandler(options: HandlerOptions) {
       .holdBody(limit)
       .then(async (held) => {
         if (!held.ok) {
-          if (held.reason === 'too-large') answer(413, `The request body is larger than the ${formatBytes(limit)} this address accepts.`, true);
+          if (held.reason === 'too-large') tooLarge();
           return;
         }
         const problem = checkAction
