@@ -29,8 +29,10 @@ export const logger = pino(logOptions());
 
 /** The logger's settings (level from LOG_LEVEL, ISO times, error stacks, redaction), for a logger on another stream. */
 export function logOptions(): pino.LoggerOptions {
+  const wanted = process.env.LOG_LEVEL?.trim().toLowerCase() ?? '';
   return {
-    level: process.env.LOG_LEVEL || 'info',
+    // An unknown LOG_LEVEL must not stop the server: it logs at info.
+    level: wanted === 'silent' || wanted in pino.levels.values ? wanted : 'info',
     timestamp: pino.stdTimeFunctions.isoTime,
     formatters: { level: (label) => ({ level: label }) },
     serializers: { err: pino.stdSerializers.errWithCause },

@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { closeDb } from '@/db/knex';
-import { base, logLines, member, PASSWORD, serverLogText, signIn } from './helpers';
+import { actionId, base, logLines, member, PASSWORD, serverLogText, signIn } from './helpers';
 
 afterAll(closeDb);
 
@@ -14,6 +14,16 @@ describe('the request log', () => {
     expect(lines[0]).toMatchObject({ level: 'info', method: 'GET', path: '/api/health', status: 200, client_address: '127.0.0.1' });
     expect(lines[0].duration_ms).toEqual(expect.any(Number));
     expect(JSON.stringify(lines[0])).not.toContain('secret=q');
+  });
+
+  it("carries Next's own warnings as JSON lines with the request id they belong to", async () => {
+    // A form posted to a page that does not have the action it names: Next warns that it cannot find the action.
+    const form = new FormData();
+    form.set(`$ACTION_ID_${actionId('signOutAction')}`, '');
+    const res = await fetch(`${base}/sign-in`, { method: 'POST', body: form, redirect: 'manual' });
+    expect(res.status).toBeLessThan(500);
+    const warning = await logLines((l) => l.request_id === res.headers.get('x-request-id') && l.source === 'console');
+    expect(warning[0]).toMatchObject({ level: 'warn', msg: expect.stringMatching(/Failed to find Server Action/) });
   });
 
   it('never holds a password or a session cookie, from the route or the sign-in form', async () => {
