@@ -1,4 +1,5 @@
 import type { NextConfig } from 'next';
+import { NEXT_ACTION_BODY_LIMIT } from './lib/http/limits';
 
 const nextConfig: NextConfig = {
   // The test command builds into its own folder so it never overwrites a running demo's build.
@@ -7,6 +8,8 @@ const nextConfig: NextConfig = {
   poweredByHeader: false,
   experimental: {
     authInterrupts: true,
+    // Our server (server/) refuses oversized bodies first, with a 413; Next's own refusal would be a 500.
+    serverActions: { bodySizeLimit: NEXT_ACTION_BODY_LIMIT },
   },
 };
 

@@ -28,10 +28,11 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: `node_modules/.bin/next start -H 127.0.0.1 -p ${PORT}`,
+    // Our server in front of Next (server/), bundled by scripts/bundle.mjs; its log goes to the test artefacts.
+    command: `mkdir -p tests/.artifacts && exec node .build/server.mjs >tests/.artifacts/e2e-server.log`,
     url: `http://127.0.0.1:${PORT}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,
-    env: { NODE_ENV: 'production' },
+    env: { NODE_ENV: 'production', PORT: String(PORT) },
   },
 });

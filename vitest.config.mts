@@ -3,6 +3,8 @@ import { defineConfig } from 'vitest/config';
 export default defineConfig({
   resolve: { tsconfigPaths: true },
   test: {
+    // The app's logger stays quiet inside test processes; the HTTP tests read the log of the server they start.
+    env: { LOG_LEVEL: 'silent' },
     projects: [
       {
         extends: true,
@@ -17,6 +19,19 @@ export default defineConfig({
           setupFiles: ['tests/integration/setup.ts'],
           fileParallelism: false,
           testTimeout: 30000,
+          hookTimeout: 60000,
+        },
+      },
+      {
+        // Against our server on the production build: run after `next build` (scripts/test.sh does).
+        extends: true,
+        test: {
+          name: 'http',
+          include: ['tests/http/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/http/global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 60000,
           hookTimeout: 60000,
         },
       },

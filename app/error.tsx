@@ -2,10 +2,10 @@
 
 import { ErrorState } from '@/components/layout/page-states';
 
-export default function RootError({ reset }: { error: Error; reset: () => void }) {
+export default function RootError({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
   return (
     <main className="mx-auto max-w-xl px-5 py-10">
-      <ErrorState reset={reset} />
+      <ErrorState error={error} reset={reset} />
     </main>
   );
 }

@@ -27,7 +27,7 @@ node_modules/.bin/tsx bench/index.ts
 export PLUMBLINE_DIST_DIR=".next-bench"
 log "production build for the page timing"
 node_modules/.bin/next build >"$DATA_DIR/bench-build.log" 2>&1 || { tail -40 "$DATA_DIR/bench-build.log" >&2; die "build failed"; }
-NODE_ENV=production node_modules/.bin/next start -H 127.0.0.1 -p "$BENCH_PORT" >"$DATA_DIR/bench-server.log" 2>&1 &
+PORT="$BENCH_PORT" NODE_ENV=production LOG_LEVEL=warn node .build/server.mjs >"$DATA_DIR/bench-server.log" 2>&1 &
 APP_PID=$!
 for _ in $(seq 1 60); do
   if node -e "fetch('http://127.0.0.1:$BENCH_PORT/api/health').then(r=>process.exit(r.ok?0:1),()=>process.exit(1))"; then break; fi

@@ -31,7 +31,8 @@ node --import tsx db/seed/demo.ts 2>"$DATA_DIR/seed.log" || { cat "$DATA_DIR/see
 log "building the app"
 node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log" >&2; die "build failed (log: .data/build.log)"; }
 
-NODE_ENV=production node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" &
+# Our server in front of Next (server/, bundled into .build/ above); it stops cleanly on TERM and INT.
+PORT="$APP_PORT" NODE_ENV=production node .build/server.mjs &
 APP_PID=$!
 for _ in $(seq 1 60); do
   if node -e "fetch('http://127.0.0.1:$APP_PORT/api/health').then(r=>process.exit(r.ok?0:1),()=>process.exit(1))"; then break; fi

@@ -1,4 +1,4 @@
-// Sums vitest's and Playwright's JSON reports into the one closing line the test command promises.
+// Sums vitest's (two runs) and Playwright's JSON reports into the one closing line the test command promises.
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 
@@ -7,14 +7,17 @@ let passed = 0;
 let failed = 0;
 let skipped = 0;
 
-const vitestFile = join(dir, 'vitest.json');
-if (existsSync(vitestFile)) {
-  const v = JSON.parse(readFileSync(vitestFile, 'utf8'));
-  passed += v.numPassedTests;
-  failed += v.numFailedTests + (v.numFailedTestSuites ?? 0);
-  skipped += v.numPendingTests + (v.numTodoTests ?? 0);
-} else {
-  failed += 1;
+// vitest runs twice: unit and integration before the build, the HTTP tests against it after.
+for (const name of ['vitest.json', 'vitest-http.json']) {
+  const vitestFile = join(dir, name);
+  if (existsSync(vitestFile)) {
+    const v = JSON.parse(readFileSync(vitestFile, 'utf8'));
+    passed += v.numPassedTests;
+    failed += v.numFailedTests + (v.numFailedTestSuites ?? 0);
+    skipped += v.numPendingTests + (v.numTodoTests ?? 0);
+  } else {
+    failed += 1;
+  }
 }
 
 const pwFile = join(dir, 'playwright.json');

@@ -27,10 +27,14 @@ mkdir -p "$RESULTS"
 status=0
 run_migrations
 log "unit and integration tests (vitest)"
-node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest.json" || status=1
+node_modules/.bin/vitest run --project unit --project integration \
+  --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest.json" || status=1
 
-log "production build for the browser tests"
+log "production build for the HTTP and browser tests"
 if node_modules/.bin/next build >"$RESULTS/build.log" 2>&1; then
+  log "HTTP tests against our server on the production build (vitest)"
+  node_modules/.bin/vitest run --project http \
+    --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest-http.json" || status=1
   log "browser tests (Playwright, Debian Chromium)"
   PLAYWRIGHT_JSON_OUTPUT_NAME="$RESULTS/playwright.json" node_modules/.bin/playwright test --reporter=list,json || status=1
 else

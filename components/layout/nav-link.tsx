@@ -1,6 +1,6 @@
 'use client';
 
-import Link from 'next/link';
+import Link, { useLinkStatus } from 'next/link';
 import { usePathname } from 'next/navigation';
 import type { ReactNode } from 'react';
 
@@ -16,6 +16,14 @@ export function NavLink({ href, children }: { href: string; children: ReactNode 
       }`}
     >
       {children}
+      <Pending />
     </Link>
   );
+}
+
+// Pages that answer 403 or 404 render before streaming (so the status is real), with no loading screen: the link
+// itself shows that the next page is on its way.
+function Pending() {
+  const { pending } = useLinkStatus();
+  return <span aria-hidden className={`ml-1.5 inline-block h-1.5 w-1.5 rounded-full bg-cord-500 align-middle ${pending ? 'animate-pulse' : 'invisible'}`} />;
 }

@@ -2,6 +2,9 @@ import { z } from 'zod';
 import { AuthError, requireRole, type RoleSet } from '@/lib/auth';
 import type { Member } from '@/db/types';
 import { ConflictError, NotFoundError } from '@/lib/errors';
+import { SERVER_FAULT } from '@/lib/http/messages';
+import { requestId } from '@/lib/http/request-meta';
+import { requestLog } from '@/lib/log';
 import { toFieldIssues, type FieldIssue } from '@/lib/validation/issues';
 
 export function jsonError(status: number, errors: FieldIssue[] | string): Response {
@@ -56,11 +59,12 @@ export function apiRoute<P = Record<string, never>>(roles: RoleSet, handler: Han
   };
 }
 
-export function errorResponse(error: unknown): Response {
+export async function errorResponse(error: unknown): Promise<Response> {
   if (error instanceof AuthError) return jsonError(error.status, error.message);
   if (error instanceof BodyError) return jsonError(400, [error.issue]);
   if (error instanceof z.ZodError) return jsonError(400, toFieldIssues(error));
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ConflictError) return jsonError(error.status, [{ path: error.field, message: error.message }]);
-  throw error;
+  (await requestLog()).error({ err: error }, 'route handler failed');
+  return Response.json({ error: SERVER_FAULT, request_id: await requestId().catch(() => 'none') }, { status: 500 });
 }

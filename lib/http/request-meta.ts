@@ -1,11 +1,7 @@
 import { headers } from 'next/headers';
+import { CLIENT_ADDRESS_HEADER, CSP_HEADER, REQUEST_ID_HEADER } from './header-names';
 
-/**
- * Headers the Plumbline server (server/) sets on every request before Next sees it. It deletes any value a client
- * sent under these names first, so code inside the app can trust them.
- */
-export const REQUEST_ID_HEADER = 'x-request-id';
-export const CLIENT_ADDRESS_HEADER = 'x-plumbline-client-address';
+export { CLIENT_ADDRESS_HEADER, CSP_HEADER, REQUEST_ID_HEADER };
 
 /** The id the server gave this request: in every log line and every 500 answer. */
 export async function requestId(): Promise<string> {
@@ -18,4 +14,9 @@ export async function requestId(): Promise<string> {
  */
 export async function clientAddress(): Promise<string> {
   return ((await headers()).get(CLIENT_ADDRESS_HEADER) ?? 'unknown').slice(0, 64);
+}
+
+/** This request's Content-Security-Policy nonce, for the few elements Next does not nonce itself. */
+export async function cspNonce(): Promise<string | undefined> {
+  return /'nonce-([A-Za-z0-9+/=]+)'/.exec((await headers()).get(CSP_HEADER) ?? '')?.[1];
 }

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { DEFAULT_VALUES, toDropCase } from '@/lib/calculator/form';
 import { simulateDrop } from '@/lib/physics';
 import { formatNumber, fromSI } from '@/lib/units';

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { formsReady, screens } from './screens';
 
 const stamp = Date.now();
@@ -68,8 +68,8 @@ test('sign up, sign out, sign in, invite a viewer who is refused the members pag
   await expect(page.getByText('Password changed.')).toBeVisible();
 
   await expect(page.getByRole('link', { name: 'Members', exact: true })).toHaveCount(0);
-  // The segment streams behind its loading state, so the refusal shows as the 403 page rather than the status line.
-  await page.goto('/members');
+  const refused = await page.goto('/members');
+  expect(refused?.status()).toBe(403);
   await expect(page.getByRole('heading', { name: 'Your role does not open this page' })).toBeVisible();
   await expect(page.getByRole('form', { name: 'Invite a member' })).toHaveCount(0);
   await screens(page, 'members-forbidden-viewer');

@@ -1,5 +1,5 @@
 import { readFile } from 'node:fs/promises';
-import { expect, test } from '@playwright/test';
+import { expect, test } from './fixtures';
 import { computeItem } from '@/lib/register/compute';
 import { itemsTemplateCsv } from '@/lib/register/csv';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';

@@ -2,6 +2,6 @@
 
 import { ErrorState } from '@/components/layout/page-states';
 
-export default function SegmentError({ reset }: { error: Error; reset: () => void }) {
-  return <ErrorState reset={reset} />;
+export default function SegmentError({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
+  return <ErrorState error={error} reset={reset} />;
 }
