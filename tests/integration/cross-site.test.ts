@@ -65,8 +65,8 @@ function request(method: string, body: Body, headers: Record<string, string> = {
 
 const ladder = { levels: DEFAULT_LADDER.map(({ name, lower_bound_j, colour }) => ({ name, lower_bound_j, colour })) };
 const WRITES: [string, string, Route, () => { id: string }, () => Body][] = [
-  ['POST /api/v1/session', 'POST', postSession as Route, () => ({ id: '' }), () => ({ kind: 'json', value: { email: home.users.admin.email, password: PASSWORD } })],
-  ['POST /api/v1/sites', 'POST', postSite as Route, () => ({ id: '' }), () => ({ kind: 'json', value: { name: 'Evil Site', kind: 'building', surface: 'ground', design_wind: 10 } })],
+  ['POST /api/v1/session', 'POST', postSession as unknown as Route, () => ({ id: '' }), () => ({ kind: 'json', value: { email: home.users.admin.email, password: PASSWORD } })],
+  ['POST /api/v1/sites', 'POST', postSite as unknown as Route, () => ({ id: '' }), () => ({ kind: 'json', value: { name: 'Evil Site', kind: 'building', surface: 'ground', design_wind: 10 } })],
   ['PATCH /api/v1/sites/:id', 'PATCH', patchSite, () => ({ id: reg.siteId }), () => ({ kind: 'json', value: { notes: 'changed' } })],
   ['DELETE /api/v1/sites/:id', 'DELETE', deleteSiteRoute, () => ({ id: reg.siteId }), () => ({ kind: 'none' })],
   ['POST /api/v1/sites/:id/levels', 'POST', postLevel, () => ({ id: reg.siteId }), () => ({ kind: 'json', value: { name: 'Evil', floor_height: 3 } })],
@@ -79,8 +79,8 @@ const WRITES: [string, string, Route, () => { id: string }, () => Body][] = [
   ],
   ['PATCH /api/v1/items/:id', 'PATCH', patchItem, () => ({ id: reg.itemId }), () => ({ kind: 'json', value: { notes: 'changed' } })],
   ['DELETE /api/v1/items/:id', 'DELETE', deleteItemRoute, () => ({ id: reg.itemId }), () => ({ kind: 'none' })],
-  ['PUT /api/v1/consequence-levels', 'PUT', putLadder as Route, () => ({ id: '' }), () => ({ kind: 'json', value: ladder })],
-  ['POST /api/v1/drops', 'POST', postDrops as Route, () => ({ id: '' }), () => ({ kind: 'json', value: { object: { mass_kg: 5 }, drag_model: 'none', medium: { preset: 'isa' }, release: { height_m: 1 } } })],
+  ['PUT /api/v1/consequence-levels', 'PUT', putLadder as unknown as Route, () => ({ id: '' }), () => ({ kind: 'json', value: ladder })],
+  ['POST /api/v1/drops', 'POST', postDrops as unknown as Route, () => ({ id: '' }), () => ({ kind: 'json', value: { object: { mass_kg: 5 }, drag_model: 'none', medium: { preset: 'isa' }, release: { height_m: 1 } } })],
   ['POST /api/v1/sites/:id/items/import', 'POST', importItemsRoute, () => ({ id: reg.siteId }), () => ({ kind: 'multipart' })],
 ];
 

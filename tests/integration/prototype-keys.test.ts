@@ -106,14 +106,14 @@ const ladderBody = () => `"levels": ${JSON.stringify(DEFAULT_LADDER.map(({ name,
 
 type Route = (request: Request, context: { params: Promise<{ id: string }> }) => Promise<Response>;
 const ROUTES: [string, string, Route, () => { id: string }, () => string, () => [string, string][]][] = [
-  ['POST /api/v1/session', 'POST', postSession as Route, () => ({ id: '' }), () => `"email": "${home.users.admin.email}", "password": "${PASSWORD}"`, () => []],
-  ['POST /api/v1/sites', 'POST', postSite as Route, () => ({ id: '' }), () => siteBody, () => []],
+  ['POST /api/v1/session', 'POST', postSession as unknown as Route, () => ({ id: '' }), () => `"email": "${home.users.admin.email}", "password": "${PASSWORD}"`, () => []],
+  ['POST /api/v1/sites', 'POST', postSite as unknown as Route, () => ({ id: '' }), () => siteBody, () => []],
   ['PATCH /api/v1/sites/:id', 'PATCH', patchSite, () => ({ id: reg.siteId }), () => '"notes": "x"', () => []],
   ['POST /api/v1/sites/:id/levels', 'POST', postLevel, () => ({ id: reg.siteId }), () => '"name": "Deck 3", "floor_height": 4', () => []],
   ['POST /api/v1/sites/:id/items', 'POST', postItem, () => ({ id: reg.siteId }), () => `${itemBody()}, "dimensions": {"diameter": 0.2}`, () => [['dimensions.__proto__', `${itemBody()}, "dimensions": {"__proto__": {"diameter": 0.2}}`]]],
   ['PATCH /api/v1/items/:id', 'PATCH', patchItem, () => ({ id: reg.itemId }), () => '"notes": "x"', () => [['dimensions.constructor', '"dimensions": {"constructor": {"prototype": {"length": 1}}}']]],
-  ['PUT /api/v1/consequence-levels', 'PUT', putLadder as Route, () => ({ id: '' }), ladderBody, () => [['levels.0.__proto__', '"levels": [{"__proto__": {"name": "x"}}]']]],
-  ['POST /api/v1/drops', 'POST', postDrops as Route, () => ({ id: '' }), () => `"object": {"mass_kg": 5}, ${dropBody}`, () => [['object.prototype', `"object": {"mass_kg": 5, "prototype": {}}, ${dropBody}`]]],
+  ['PUT /api/v1/consequence-levels', 'PUT', putLadder as unknown as Route, () => ({ id: '' }), ladderBody, () => [['levels.0.__proto__', '"levels": [{"__proto__": {"name": "x"}}]']]],
+  ['POST /api/v1/drops', 'POST', postDrops as unknown as Route, () => ({ id: '' }), () => `"object": {"mass_kg": 5}, ${dropBody}`, () => [['object.prototype', `"object": {"mass_kg": 5, "prototype": {}}, ${dropBody}`]]],
 ];
 
 describe('JSON routes', () => {
