@@ -78,7 +78,7 @@ export function refuseCrossSite(request: Request, body: BodyKind = 'json'): Resp
   // A DELETE reads no body, so only one that sends a body must say what it is.
   const length = request.headers.get('content-length');
   const sendsBody = request.method !== 'DELETE' || (length !== null && length !== '0') || request.headers.has('transfer-encoding');
-  const type = (request.headers.get('content-type') ?? '').split(';')[0].trim().toLowerCase();
+  const type = (request.headers.get('content-type') ?? '').split(';')[0].trim().toLowerCase().slice(0, 100);
   if (sendsBody && type !== MEDIA_TYPE[body]) {
     return jsonError(415, `Send the body as ${MEDIA_TYPE[body]}${type ? `, not ${type}` : ''}.`);
   }
