@@ -6,7 +6,8 @@ import { closedFormSpeedCurve } from '@/lib/calculator/closed-form-curve';
 import type { DropCase, DropResult } from '@/lib/physics';
 import { REFERENCE_ENERGIES } from '@/lib/reference-energies';
 import { formatQuantity, fromSI, unitLabel } from '@/lib/units';
-import { PLOT_COLOURS as C, PlotFrame } from './plot-frame';
+import { PLOT_COLOURS as C } from './plot-colours';
+import { PlotFrame } from './plot-frame';
 
 interface Props {
   result: DropResult;

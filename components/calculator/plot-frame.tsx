@@ -3,6 +3,7 @@
 import dynamic from 'next/dynamic';
 import { useEffect, useState } from 'react';
 import type { Config, Data, Layout } from 'plotly.js';
+import { PLOT_COLOURS } from './plot-colours';
 
 // Plotly is 1.4 MB gzipped: it is fetched only by pages that draw a plot, after the page itself is usable.
 const Plot = dynamic(
@@ -17,16 +18,6 @@ const Plot = dynamic(
 );
 
 const CONFIG: Partial<Config> = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['lasso2d', 'select2d'] };
-
-export const PLOT_COLOURS = {
-  ink: '#1b2430',
-  muted: '#8a94a3',
-  rule: '#d8d2c4',
-  cord: '#1f6f78',
-  brass: '#a9771a',
-  flare: '#b4461a',
-  water: '#c8e3e6',
-} as const;
 
 export function PlotFrame({ title, data, layout, height = 280 }: { title: string; data: Data[]; layout: Partial<Layout>; height?: number }) {
   const [font, setFont] = useState('system-ui, sans-serif');

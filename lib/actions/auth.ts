@@ -5,13 +5,14 @@ import { createOrganisationWithAdmin } from '@/db/organisations';
 import { findUserByEmail } from '@/db/users';
 import { ConflictError } from '@/lib/errors';
 import { authenticate, endSession, hashPassword, startSession } from '@/lib/auth';
-import { formToObject, toFieldErrors } from '@/lib/validation/issues';
+import { parseForm } from '@/lib/validation/input';
+import { toFieldErrors } from '@/lib/validation/issues';
 import { signInSchema, signUpSchema } from '@/lib/validation/user';
 import type { ActionState } from './state';
 
 // Sign-in and sign-up are the two actions open to signed-out visitors; every other action starts with requireRole.
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const parsed = signInSchema.safeParse(formToObject(form));
+  const parsed = parseForm(signInSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   const outcome = await authenticate(parsed.data.email, parsed.data.password);
   if (!outcome.ok) return { message: outcome.message };
@@ -20,7 +21,7 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
 }
 
 export async function signUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const parsed = signUpSchema.safeParse(formToObject(form));
+  const parsed = parseForm(signUpSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   const input = parsed.data;
   if (await findUserByEmail(input.email)) {

@@ -5,7 +5,8 @@ import { addMember, changeRole, removeMember } from '@/db/memberships';
 import { renameOrganisation } from '@/db/organisations';
 import { hashPassword, requireRole, temporaryPassword } from '@/lib/auth';
 import { ConflictError, NotFoundError } from '@/lib/errors';
-import { formToObject, toFieldErrors } from '@/lib/validation/issues';
+import { parseForm } from '@/lib/validation/input';
+import { toFieldErrors } from '@/lib/validation/issues';
 import { changeRoleSchema, inviteMemberSchema, removeMemberSchema } from '@/lib/validation/member';
 import { organisationSettingsSchema } from '@/lib/validation/organisation';
 import type { ActionState } from './state';
@@ -18,7 +19,7 @@ function known(error: unknown): ActionState {
 
 export async function inviteMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const admin = await requireRole(['admin']);
-  const parsed = inviteMemberSchema.safeParse(formToObject(form));
+  const parsed = parseForm(inviteMemberSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   const password = temporaryPassword();
   try {
@@ -45,7 +46,7 @@ export async function inviteMemberAction(_prev: ActionState, form: FormData): Pr
 
 export async function changeRoleAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const admin = await requireRole(['admin']);
-  const parsed = changeRoleSchema.safeParse(formToObject(form));
+  const parsed = parseForm(changeRoleSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   try {
     await changeRole({ organisationId: admin.organisationId, actorUserId: admin.userId, ...parsed.data });
@@ -58,7 +59,7 @@ export async function changeRoleAction(_prev: ActionState, form: FormData): Prom
 
 export async function removeMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const admin = await requireRole(['admin']);
-  const parsed = removeMemberSchema.safeParse(formToObject(form));
+  const parsed = parseForm(removeMemberSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   try {
     await removeMember({ organisationId: admin.organisationId, actorUserId: admin.userId, ...parsed.data });
@@ -71,7 +72,7 @@ export async function removeMemberAction(_prev: ActionState, form: FormData): Pr
 
 export async function organisationSettingsAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const admin = await requireRole(['admin']);
-  const parsed = organisationSettingsSchema.safeParse(formToObject(form));
+  const parsed = parseForm(organisationSettingsSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   await renameOrganisation(admin.organisationId, parsed.data.name, admin.userId);
   revalidatePath('/', 'layout');

@@ -3,13 +3,14 @@
 import { revalidatePath } from 'next/cache';
 import { findUserById, updatePasswordHash, updateProfile } from '@/db/users';
 import { hashPassword, requireRole, verifyPassword } from '@/lib/auth';
-import { formToObject, toFieldErrors } from '@/lib/validation/issues';
+import { parseForm } from '@/lib/validation/input';
+import { toFieldErrors } from '@/lib/validation/issues';
 import { passwordChangeSchema, profileSchema } from '@/lib/validation/user';
 import type { ActionState } from './state';
 
 export async function updateProfileAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const me = await requireRole('any');
-  const parsed = profileSchema.safeParse(formToObject(form));
+  const parsed = parseForm(profileSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   await updateProfile(me.userId, me.organisationId, parsed.data);
   revalidatePath('/', 'layout');
@@ -18,7 +19,7 @@ export async function updateProfileAction(_prev: ActionState, form: FormData): P
 
 export async function changePasswordAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const me = await requireRole('any');
-  const parsed = passwordChangeSchema.safeParse(formToObject(form));
+  const parsed = parseForm(passwordChangeSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   const user = await findUserById(me.userId);
   if (!user || !(await verifyPassword(parsed.data.currentPassword, user.password_hash))) {

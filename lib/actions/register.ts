@@ -11,10 +11,11 @@ import { EDITORS } from '@/lib/register/api';
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { isUuid } from '@/lib/validation/ids';
-import { formToObject, toFieldErrors } from '@/lib/validation/issues';
+import { formToObject, unflatten, unsafeInputFailure, UnsafeInputError } from '@/lib/validation/input';
+import { toFieldErrors } from '@/lib/validation/issues';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
-import { unflatten, unitsField } from '@/lib/validation/quantity';
+import { unitsField } from '@/lib/validation/quantity';
 import { siteSchema } from '@/lib/validation/site';
 import type { ActionState } from './state';
 
@@ -26,17 +27,31 @@ function known(error: unknown, what: string): ActionState {
   throw error;
 }
 
-/** The form's fields, nested, and the unit system its numbers were typed in. */
-function read(form: FormData): { values: Record<string, unknown>; units: 'si' | 'us'; id: string } {
-  const flat = formToObject(form);
-  const units = unitsField.safeParse(flat.units);
-  return { values: unflatten(flat), units: units.success ? units.data : 'si', id: flat.id ?? '' };
+interface FormInput {
+  values: Record<string, unknown>;
+  units: 'si' | 'us';
+  id: string;
+  siteId: string;
+  /** Set when a field's name is refused: the action answers with it and does nothing. */
+  refused?: ActionState;
 }
 
+/** The form's fields, nested, and the unit system its numbers were typed in. */
+function read(form: FormData): FormInput {
+  try {
+    const flat = formToObject(form);
+    const units = unitsField.safeParse(flat.units);
+    return { values: unflatten(flat), units: units.success ? units.data : 'si', id: flat.id ?? '', siteId: flat.site_id ?? '' };
+  } catch (error) {
+    if (!(error instanceof UnsafeInputError)) throw error;
+    return { values: {}, units: 'si', id: '', siteId: '', refused: { errors: toFieldErrors(unsafeInputFailure(error).error), message: error.message } };
+  }
+}
 
 export async function saveSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(EDITORS);
-  const { values, units, id } = read(form);
+  const { values, units, id, refused } = read(form);
+  if (refused) return refused;
   const parsed = siteSchema(units).safeParse(values);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
   let siteId = id;
@@ -57,7 +72,8 @@ export async function saveSiteAction(_prev: ActionState, form: FormData): Promis
 
 export async function deleteSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(EDITORS);
-  const { id } = read(form);
+  const { id, refused } = read(form);
+  if (refused) return refused;
   if (!isUuid(id)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
   try {
     await deleteSite(member.organisationId, member.userId, id);
@@ -70,8 +86,8 @@ export async function deleteSiteAction(_prev: ActionState, form: FormData): Prom
 
 export async function saveLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(EDITORS);
-  const { values, units, id } = read(form);
-  const siteId = String(values.site_id ?? '');
+  const { values, units, id, siteId, refused } = read(form);
+  if (refused) return refused;
   const parsed = levelSchema(units).safeParse(values);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
   try {
@@ -92,11 +108,12 @@ export async function saveLevelAction(_prev: ActionState, form: FormData): Promi
 
 export async function deleteLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(EDITORS);
-  const { id, values } = read(form);
+  const { id, siteId, refused } = read(form);
+  if (refused) return refused;
   if (!isUuid(id)) return { message: 'That level no longer exists: it may have been deleted by someone else.' };
   try {
     await deleteLevel(member.organisationId, member.userId, id);
-    revalidatePath(`/sites/${String(values.site_id ?? '')}`);
+    revalidatePath(`/sites/${siteId}`);
     return { ok: true, message: 'Level deleted.' };
   } catch (error) {
     return known(error, 'level');
@@ -105,8 +122,8 @@ export async function deleteLevelAction(_prev: ActionState, form: FormData): Pro
 
 export async function saveItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(EDITORS);
-  const { values, units, id } = read(form);
-  const siteId = String(values.site_id ?? '');
+  const { values, units, id, siteId, refused } = read(form);
+  if (refused) return refused;
   const parsed = itemSchema(units).safeParse(values);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
   let itemId = id;
@@ -128,21 +145,22 @@ export async function saveItemAction(_prev: ActionState, form: FormData): Promis
 
 export async function deleteItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(EDITORS);
-  const { id, values } = read(form);
+  const { id, siteId, refused } = read(form);
+  if (refused) return refused;
   if (!isUuid(id)) return { message: 'That item no longer exists: it may have been deleted by someone else.' };
   try {
     await deleteItem(member.organisationId, member.userId, id);
   } catch (error) {
     return known(error, 'item');
   }
-  const siteId = String(values.site_id ?? '');
   revalidatePath(`/sites/${siteId}`);
   redirect(isUuid(siteId) ? `/sites/${siteId}` : '/sites');
 }
 
 export async function saveLadderAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const member = await requireRole(['admin']);
-  const { values } = read(form);
+  const { values, refused } = read(form);
+  if (refused) return refused;
   const parsed = ladderSchema.safeParse({ levels: values.levels ?? [] });
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: CHECK };
   const { reclassified } = await replaceLadder(member.organisationId, member.userId, parsed.data);

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { MATERIAL_IDS, material, type MaterialId } from '@/lib/materials';
 import { DRAG_MODELS, SHAPE_IDS, shapeDimensions, shapeProperties, type DragModel, type DropCase, type ShapeId } from '@/lib/physics';
-import { formatNumber, fromSI, toSI, unitLabel, type Quantity } from '@/lib/units';
+import { fromSI, toSI } from '@/lib/units';
+import { checkQuantity, type QuantityRule } from '@/lib/validation/quantity';
 import type { UnitSystem } from '@/db/types';
 
 /**
@@ -91,18 +92,7 @@ export const DEFAULT_VALUES: CalculatorValues = {
   model: 'auto',
 };
 
-interface NumberRule {
-  label: string;
-  quantity: Quantity | null;
-  unitless?: string;
-  /** SI limits */
-  min?: number;
-  max?: number;
-  /** true: min itself is not allowed */
-  exclusiveMin?: boolean;
-}
-
-export const RULES: Record<string, NumberRule> = {
+export const RULES: Record<string, QuantityRule> = {
   diameter: { label: 'Diameter', quantity: 'length', min: 0, max: 50, exclusiveMin: true },
   side: { label: 'Side', quantity: 'length', min: 0, max: 50, exclusiveMin: true },
   length: { label: 'Length', quantity: 'length', min: 0, max: 100, exclusiveMin: true },
@@ -131,27 +121,10 @@ export const RULES: Record<string, NumberRule> = {
   releaseAngle: { label: 'Release direction', quantity: null, unitless: '°', min: -90, max: 90 },
 };
 
-function limitText(rule: NumberRule, bound: number, units: UnitSystem): string {
-  if (!rule.quantity) return `${formatNumber(bound, 4)}${rule.unitless ?? ''}`;
-  return `${formatNumber(fromSI(rule.quantity, bound, units), 4)} ${unitLabel(rule.quantity, units)}`;
-}
-
 /** The number typed in a field, in SI, or the message that says why it is not acceptable. */
 export function checkNumber(key: string, raw: string, units: UnitSystem): { value: number } | { message: string } {
   const rule = RULES[key];
-  const text = raw.trim();
-  if (!text) return { message: `${rule.label} is required.` };
-  const typed = Number(text.replace(',', '.'));
-  if (!Number.isFinite(typed)) return { message: `${rule.label} must be a number.` };
-  const value = rule.quantity ? toSI(rule.quantity, typed, units) : typed;
-  // A bound typed in the user's own units must pass even where the conversion rounds it a hair outside.
-  const slack = 1e-9 * Math.max(1, Math.abs(value));
-  if (rule.min !== undefined) {
-    if (rule.exclusiveMin && value <= rule.min) return { message: `${rule.label} must be greater than ${limitText(rule, rule.min, units)}.` };
-    if (!rule.exclusiveMin && value < rule.min - slack) return { message: `${rule.label} must be at least ${limitText(rule, rule.min, units)}.` };
-  }
-  if (rule.max !== undefined && value > rule.max + slack) return { message: `${rule.label} must be at most ${limitText(rule, rule.max, units)}.` };
-  return { value };
+  return checkQuantity(rule, raw, units) ?? { message: `${rule.label} is required.` };
 }
 
 export function dimensionsOf(shape: ShapeChoice): readonly DimensionKey[] {

@@ -5,6 +5,8 @@ import { ConflictError, NotFoundError } from '@/lib/errors';
 import { SERVER_FAULT } from '@/lib/http/messages';
 import { requestId } from '@/lib/http/request-meta';
 import { requestLog } from '@/lib/log';
+import { ownOrigins } from './origin';
+import { safeJson, UnsafeInputError } from '@/lib/validation/input';
 import { toFieldIssues, type FieldIssue } from '@/lib/validation/issues';
 
 export function jsonError(status: number, errors: FieldIssue[] | string): Response {
@@ -23,14 +25,28 @@ export async function readJson<S extends z.ZodType>(request: Request, schema: S)
   return schema.parse(await readJsonObject(request));
 }
 
-/** A JSON object body, for handlers whose schema depends on what the body says (its unit system, say). */
-export async function readJsonObject(request: Request): Promise<Record<string, unknown>> {
-  let body: unknown;
+/**
+ * The one JSON body reader: any JSON value, rebuilt with null-prototype objects; a prototype key at any depth
+ * ("__proto__", "constructor", "prototype") or nesting deeper than MAX_JSON_DEPTH answers 400 naming the path.
+ */
+export async function readJsonBody(request: Request): Promise<unknown> {
+  let parsed: unknown;
   try {
-    body = await request.json();
+    parsed = JSON.parse(await request.text());
   } catch {
     throw new BodyError({ path: '(body)', message: 'The body must be JSON.' });
   }
+  try {
+    return safeJson(parsed);
+  } catch (error) {
+    if (error instanceof UnsafeInputError) throw new BodyError({ path: error.field, message: error.message });
+    throw error;
+  }
+}
+
+/** A JSON object body, for handlers whose schema depends on what the body says (its unit system, say). */
+export async function readJsonObject(request: Request): Promise<Record<string, unknown>> {
+  const body = await readJsonBody(request);
   if (typeof body !== 'object' || body === null || Array.isArray(body)) {
     throw new BodyError({ path: '(body)', message: 'The body must be a JSON object.' });
   }
@@ -44,12 +60,43 @@ export function badRequest(path: string, message: string): never {
 
 type Handler<P> = (request: Request, context: { member: Member; params: P }) => Promise<Response>;
 
+/** What a route's writes carry: a JSON body, or a file upload. */
+export type BodyKind = 'json' | 'multipart';
+const MEDIA_TYPE: Record<BodyKind, string> = { json: 'application/json', multipart: 'multipart/form-data' };
+const WRITES = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+
 /**
- * Every route handler goes through here: the role check comes first, then the handler; known errors map to
- * their statuses (401/403 auth, 400 validation with field paths, 404, 409/422 conflicts).
+ * Refuses a write a page on another site could have sent with a member's cookie (403), and a write body that is not
+ * the route's kind (415): a cross-site form can post text/plain or form data without a preflight, never JSON.
+ * Browsers send Origin and Sec-Fetch-Site on such requests; a request with neither (curl, scripts) holds no one
+ * else's cookie and passes. Exported for the sign-in route, which has no role to check.
  */
-export function apiRoute<P = Record<string, never>>(roles: RoleSet, handler: Handler<P>) {
+export function refuseCrossSite(request: Request, body: BodyKind = 'json'): Response | null {
+  if (!WRITES.has(request.method)) return null;
+  const origin = request.headers.get('origin');
+  const site = request.headers.get('sec-fetch-site');
+  if ((origin !== null && !ownOrigins(request).has(origin)) || (site !== null && site !== 'same-origin' && site !== 'none')) {
+    return jsonError(403, 'Cross-site requests are refused: send this request from Plumbline itself.');
+  }
+  // A DELETE reads no body, so only one that sends a body must say what it is.
+  const length = request.headers.get('content-length');
+  const sendsBody = request.method !== 'DELETE' || (length !== null && length !== '0') || request.headers.has('transfer-encoding');
+  const type = (request.headers.get('content-type') ?? '').split(';')[0].trim().toLowerCase().slice(0, 100);
+  if (sendsBody && type !== MEDIA_TYPE[body]) {
+    return jsonError(415, `Send the body as ${MEDIA_TYPE[body]}${type ? `, not ${type}` : ''}.`);
+  }
+  return null;
+}
+
+/**
+ * Every route handler goes through here: a write from another site or with the wrong content type is refused
+ * before anything else, then the role check, then the handler; known errors map to their statuses (401/403 auth,
+ * 400 validation with field paths, 404, 409/422 conflicts).
+ */
+export function apiRoute<P = Record<string, never>>(roles: RoleSet, handler: Handler<P>, options: { body?: BodyKind } = {}) {
   return async (request: Request, context: { params: Promise<P> }): Promise<Response> => {
+    const refused = refuseCrossSite(request, options.body);
+    if (refused) return refused;
     try {
       const member = await requireRole(roles, 'throw');
       return await handler(request, { member, params: await context.params });

@@ -4,8 +4,10 @@ import type { UnitSystem } from '@/db/types';
 import { DIMENSIONS, dimensionsOf, type ShapeChoice } from '@/lib/calculator/form';
 import { fromSI, type Quantity } from '@/lib/units';
 import { itemSchema, type ItemInput } from '@/lib/validation/item';
+import { isRefusedKey } from '@/lib/validation/input';
 import { quantityField } from '@/lib/validation/quantity';
 import { SHAPE_LABELS } from '@/components/calculator/labels';
+import { escapeCell, unescapeCell } from './csv-cells';
 import {
   CATEGORY_LABELS,
   ITEM_CATEGORIES,
@@ -136,6 +138,7 @@ type Resolved = { kind: 'column'; def: ColumnDef; units: UnitSystem } | { kind: 
 
 function resolveHeader(raw: string): Resolved {
   const name = raw.trim().toLowerCase();
+  if (isRefusedKey(name)) return { kind: 'problem', message: `Column name "${name}" is not accepted.` };
   const exact = BY_NAME.get(name);
   if (exact) return { kind: 'column', ...exact };
   const unitless = ALL_COLUMNS.find((d) => d.quantity && (name === d.key || name.startsWith(`${d.key}_`)));
@@ -161,15 +164,6 @@ const CHOICES: Record<'category' | 'shape' | 'securing', { label: string; ids: r
   shape: { label: 'Shape', ids: Object.keys(SHAPE_LABELS), map: choiceMap(Object.keys(SHAPE_LABELS), SHAPE_LABELS) },
   securing: { label: 'Securing', ids: SECURING, map: choiceMap(SECURING, SECURING_LABELS) },
 };
-
-// The characters a spreadsheet reads as the start of a formula (OWASP, "CSV Injection"). Papaparse's own default
-// pattern ends in ".*$", which misses a cell whose formula is followed by a line break, so the pattern is ours.
-const FORMULA_START = /^[=+\-@\t\r]/;
-const ESCAPED_FORMULA = /^'[=+\-@\t\r]/;
-
-function unescapeCell(cell: string): string {
-  return ESCAPED_FORMULA.test(cell) ? cell.slice(1) : cell;
-}
 
 function utf8Bytes(text: string): number {
   // Every UTF-16 unit is at most 3 UTF-8 bytes, so most files need no encoding to be measured.
@@ -317,6 +311,15 @@ function columnKeyOf(path: string): string {
   return path.startsWith('dimensions.') ? `dim_${path.slice(11)}` : path;
 }
 
+/** A row's cells by column name, for the preview; a refused column name is left out rather than made a key. */
+function previewCells(columns: string[], cells: string[]): Record<string, string> {
+  const out: Record<string, string> = Object.create(null);
+  columns.forEach((column, i) => {
+    if (!isRefusedKey(column.trim().toLowerCase())) out[column] = cells[i] ?? '';
+  });
+  return out;
+}
+
 export function parseItemsCsv(text: string, options: { levels: { id: string; name: string }[]; existingTags: string[] }): CsvImport {
   const empty = (problem: CsvProblem): CsvImport => ({
     columns: [],
@@ -338,7 +341,7 @@ export function parseItemsCsv(text: string, options: { levels: { id: string; nam
   const dataRows = rows.slice(1);
   const preview = dataRows.slice(0, 10).map((r) => ({
     line: r.line,
-    cells: Object.fromEntries(header.columns.map((c, i) => [c, r.cells[i] ?? ''])),
+    cells: previewCells(header.columns, r.cells),
   }));
   const base = { columns: header.columns, total_rows: dataRows.length, preview };
   const fileProblems = [...(readProblem ? [readProblem] : []), ...(rows.length ? header.problems : [])];
@@ -346,6 +349,7 @@ export function parseItemsCsv(text: string, options: { levels: { id: string; nam
   if (fileProblems.length) return { ...base, valid: [], problems: sortProblems(fileProblems, header.columns), invalid_lines: 0, fatal: true };
 
   const { at, majority } = header;
+  const fromExport = at.has('model_version');
   const minority = OTHER[majority];
   const schemas: Record<UnitSystem, ReturnType<typeof itemSchema>> = { si: itemSchema('si'), us: itemSchema('us') };
   const levelIds = new Map<string, string>();
@@ -368,7 +372,8 @@ export function parseItemsCsv(text: string, options: { levels: { id: string; nam
   const badLines = new Set<number>();
 
   for (const row of dataRows) {
-    const cells = row.cells.map(unescapeCell);
+    // Only an export escaped its cells; any other file is read exactly as typed, apostrophes and all.
+    const cells = fromExport ? row.cells.map(unescapeCell) : row.cells;
     const cell = (key: string): string | undefined => {
       const place = at.get(key);
       return place ? cells[place.index] : undefined;
@@ -399,7 +404,8 @@ export function parseItemsCsv(text: string, options: { levels: { id: string; nam
     const securing = choice('securing');
 
     const levelName = (cell('level') ?? '').trim();
-    const levelId = levelIds.get(levelName.toLowerCase());
+    // The template escapes level names as an export does, though it is no export.
+    const levelId = levelIds.get(levelName.toLowerCase()) ?? levelIds.get(unescapeCell(levelName).toLowerCase());
     if (!levelId) {
       judged.add('level');
       add('level', levelName ? `Unknown level "${levelName}": ${levelList}.` : 'Level is required.');
@@ -525,7 +531,7 @@ function inUnits(quantity: Quantity, value: number | null | undefined, units: Un
 
 function toCsv(fields: string[], data: string[][]): string {
   // The byte-order mark makes spreadsheet programs read the file as UTF-8; parseItemsCsv skips it.
-  return `\uFEFF${Papa.unparse({ fields, data }, { escapeFormulae: FORMULA_START, newline: '\r\n' })}\r\n`;
+  return `\uFEFF${Papa.unparse({ fields, data: data.map((row) => row.map(escapeCell)) }, { escapeFormulae: false, newline: '\r\n' })}\r\n`;
 }
 
 interface ItemCells {

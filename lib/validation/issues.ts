@@ -13,20 +13,15 @@ export function toFieldIssues(error: z.ZodError): FieldIssue[] {
   }));
 }
 
-/** The first message per field, keyed as the form names its inputs, for useActionState. */
+/**
+ * The first message per field, keyed as the form names its inputs, for useActionState. A plain object, because
+ * React sends only those to the browser; defined rather than assigned, so a refused name such as "__proto__" is
+ * kept as a key instead of reaching the prototype.
+ */
 export function toFieldErrors(error: z.ZodError): Record<string, string> {
   const out: Record<string, string> = {};
   for (const { path, message } of toFieldIssues(error)) {
-    if (!(path in out)) out[path] = message;
-  }
-  return out;
-}
-
-/** A form's fields as a plain object; repeated names keep the last value. */
-export function formToObject(form: FormData): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const [k, v] of form.entries()) {
-    if (typeof v === 'string') out[k] = v;
+    if (!Object.hasOwn(out, path)) Object.defineProperty(out, path, { value: message, enumerable: true, writable: true, configurable: true });
   }
   return out;
 }

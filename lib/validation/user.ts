@@ -1,37 +1,43 @@
 import { z } from 'zod';
 import { UNIT_SYSTEMS } from '@/db/types';
+import { storableText } from './text';
 
 const email = z
   .string({ error: 'E-mail is required.' })
   .trim()
   .min(1, 'E-mail is required.')
   .max(254, 'E-mail must be at most 254 characters.')
+  .superRefine(storableText('E-mail'))
   .pipe(z.email('E-mail must be a valid address, like name@example.com.'));
 
 const displayName = z
   .string({ error: 'Name is required.' })
   .trim()
   .min(1, 'Name is required.')
-  .max(120, 'Name must be at most 120 characters.');
+  .max(120, 'Name must be at most 120 characters.')
+  .superRefine(storableText('Name'));
 
 // bcrypt reads at most 72 bytes; a longer password would be silently truncated.
 const newPassword = z
   .string({ error: 'Password is required.' })
   .min(10, 'Password must be at least 10 characters.')
-  .max(72, 'Password must be at most 72 characters.');
+  .max(72, 'Password must be at most 72 characters.')
+  .superRefine(storableText('Password'));
 
 export const organisationName = z
   .string({ error: 'Organisation name is required.' })
   .trim()
   .min(2, 'Organisation name must be at least 2 characters.')
-  .max(120, 'Organisation name must be at most 120 characters.');
+  .max(120, 'Organisation name must be at most 120 characters.')
+  .superRefine(storableText('Organisation name'));
 
 export const signInSchema = z.object({
   email,
   password: z
     .string({ error: 'Password is required.' })
     .min(1, 'Password is required.')
-    .max(200, 'Password must be at most 200 characters.'),
+    .max(200, 'Password must be at most 200 characters.')
+    .superRefine(storableText('Password')),
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
@@ -51,7 +57,11 @@ export type ProfileInput = z.infer<typeof profileSchema>;
 
 export const passwordChangeSchema = z
   .object({
-    currentPassword: z.string({ error: 'Current password is required.' }).min(1, 'Current password is required.').max(200),
+    currentPassword: z
+      .string({ error: 'Current password is required.' })
+      .min(1, 'Current password is required.')
+      .max(200)
+      .superRefine(storableText('Current password')),
     newPassword,
     confirmPassword: z.string({ error: 'Repeat the new password.' }),
   })

@@ -4,7 +4,7 @@ import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
 import { itemSchema } from '@/lib/validation/item';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { siteSchema } from '@/lib/validation/site';
-import { unflatten } from '@/lib/validation/quantity';
+import { unflatten } from '@/lib/validation/input';
 
 const g0 = 9.80665; // CGPM 1901, standard acceleration of gravity (exact)
 const FT_LBF_J = 0.3048 * 0.45359237 * g0; // NIST SP 811: ft and lb exact; 1 ft·lbf = 1.355 817 948 J

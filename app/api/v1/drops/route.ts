@@ -1,4 +1,4 @@
-import { apiRoute, jsonError } from '@/lib/http/api';
+import { apiRoute, jsonError, readJsonBody } from '@/lib/http/api';
 import { PhysicsInputError, PhysicsSolveError, simulateDrop } from '@/lib/physics';
 import { dropCaseSchema } from '@/lib/schemas/drop-case';
 import { toFieldIssues, type FieldIssue } from '@/lib/validation/issues';
@@ -7,12 +7,7 @@ const MAX_CASES = 100;
 
 /** One drop case, or an array of at most 100, computed with the physics core. Every member may compute. */
 export const POST = apiRoute('any', async (request) => {
-  let body: unknown;
-  try {
-    body = await request.json();
-  } catch {
-    return jsonError(400, [{ path: '(body)', message: 'The body must be JSON.' }]);
-  }
+  const body = await readJsonBody(request);
   const batch = Array.isArray(body);
   const cases = batch ? (body as unknown[]) : [body];
   if (batch && (cases.length === 0 || cases.length > MAX_CASES)) {

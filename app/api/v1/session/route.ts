@@ -1,11 +1,13 @@
 import { authenticate, endSession, startSession } from '@/lib/auth';
-import { apiRoute, errorResponse, jsonError, readJson } from '@/lib/http/api';
+import { apiRoute, errorResponse, jsonError, readJson, refuseCrossSite } from '@/lib/http/api';
 import { memberJson } from '@/lib/member-view';
 import { signInSchema } from '@/lib/validation/user';
 
 export const GET = apiRoute('any', async (_request, { member }) => Response.json(memberJson(member)));
 
 export async function POST(request: Request): Promise<Response> {
+  const refused = refuseCrossSite(request);
+  if (refused) return refused;
   try {
     const input = await readJson(request, signInSchema);
     const outcome = await authenticate(input.email, input.password);

@@ -3,6 +3,7 @@ import { listLevels } from '@/db/levels';
 import { apiRoute, badRequest } from '@/lib/http/api';
 import { EDITORS, siteOf } from '@/lib/register/api';
 import { CSV_LIMITS, parseItemsCsv, type CsvProblem } from '@/lib/register/csv';
+import { cleanText } from '@/lib/validation/text';
 
 type Params = { id: string };
 const MODES = ['check', 'valid-only', 'all-or-nothing'] as const;
@@ -32,7 +33,8 @@ export const POST = apiRoute<Params>(EDITORS, async (request, { member, params }
   const file = form.get('file');
   if (!(file instanceof Blob)) badRequest('file', 'Attach the CSV file in the "file" field.');
   if (file.size > CSV_LIMITS.maxBytes) badRequest('file', 'The file is larger than 5 MB: split it and import the parts.');
-  const fileName = file instanceof File ? file.name : 'upload.csv';
+  // The name goes into the audit log's jsonb, which refuses NUL and lone surrogates, and into every answer.
+  const fileName = (file instanceof File ? cleanText(file.name, 200) : '') || 'upload.csv';
 
   const [levels, existingTags] = await Promise.all([listLevels(member.organisationId, site.id), siteTags(member.organisationId, site.id)]);
   const parsed = parseItemsCsv(await file.text(), { levels, existingTags });
@@ -62,4 +64,4 @@ export const POST = apiRoute<Params>(EDITORS, async (request, { member, params }
     { file_name: fileName, mode, skipped_rows: parsed.invalid_lines },
   );
   return Response.json({ ...summary, imported });
-});
+}, { body: 'multipart' });
