@@ -16,6 +16,7 @@ import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { unflatten, unitsField } from '@/lib/validation/quantity';
 import { siteSchema } from '@/lib/validation/site';
+import { outageSafe } from './outage';
 import type { ActionState } from './state';
 
 const CHECK = 'Check the highlighted fields.';
@@ -33,8 +34,7 @@ function read(form: FormData): { values: Record<string, unknown>; units: 'si' | 
   return { values: unflatten(flat), units: units.success ? units.data : 'si', id: flat.id ?? '' };
 }
 
-
-export async function saveSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveSiteAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { values, units, id } = read(form);
   const parsed = siteSchema(units).safeParse(values);
@@ -53,9 +53,9 @@ export async function saveSiteAction(_prev: ActionState, form: FormData): Promis
   }
   revalidatePath('/sites');
   redirect(`/sites/${siteId}`);
-}
+});
 
-export async function deleteSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const deleteSiteAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { id } = read(form);
   if (!isUuid(id)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
@@ -66,9 +66,9 @@ export async function deleteSiteAction(_prev: ActionState, form: FormData): Prom
   }
   revalidatePath('/sites');
   redirect('/sites');
-}
+});
 
-export async function saveLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveLevelAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { values, units, id } = read(form);
   const siteId = String(values.site_id ?? '');
@@ -88,9 +88,9 @@ export async function saveLevelAction(_prev: ActionState, form: FormData): Promi
   } catch (error) {
     return known(error, id ? 'level' : 'site');
   }
-}
+});
 
-export async function deleteLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const deleteLevelAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { id, values } = read(form);
   if (!isUuid(id)) return { message: 'That level no longer exists: it may have been deleted by someone else.' };
@@ -101,9 +101,9 @@ export async function deleteLevelAction(_prev: ActionState, form: FormData): Pro
   } catch (error) {
     return known(error, 'level');
   }
-}
+});
 
-export async function saveItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveItemAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { values, units, id } = read(form);
   const siteId = String(values.site_id ?? '');
@@ -124,9 +124,9 @@ export async function saveItemAction(_prev: ActionState, form: FormData): Promis
   }
   revalidatePath(`/sites/${siteId}`);
   redirect(`/items/${itemId}?added=1`);
-}
+});
 
-export async function deleteItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const deleteItemAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { id, values } = read(form);
   if (!isUuid(id)) return { message: 'That item no longer exists: it may have been deleted by someone else.' };
@@ -138,9 +138,9 @@ export async function deleteItemAction(_prev: ActionState, form: FormData): Prom
   const siteId = String(values.site_id ?? '');
   revalidatePath(`/sites/${siteId}`);
   redirect(isUuid(siteId) ? `/sites/${siteId}` : '/sites');
-}
+});
 
-export async function saveLadderAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveLadderAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(['admin']);
   const { values } = read(form);
   const parsed = ladderSchema.safeParse({ levels: values.levels ?? [] });
@@ -148,4 +148,4 @@ export async function saveLadderAction(_prev: ActionState, form: FormData): Prom
   const { reclassified } = await replaceLadder(member.organisationId, member.userId, parsed.data);
   revalidatePath('/', 'layout');
   return { ok: true, message: `Ladder saved; ${reclassified} register line(s) reclassified.` };
-}
+});

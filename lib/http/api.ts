@@ -1,7 +1,9 @@
 import { z } from 'zod';
 import { AuthError, requireRole, type RoleSet } from '@/lib/auth';
+import { isDatabaseUnreachable } from '@/db/connection-errors';
 import type { Member } from '@/db/types';
-import { ConflictError, NotFoundError } from '@/lib/errors';
+import { ConflictError, NotFoundError, UnavailableError } from '@/lib/errors';
+import { requestId } from '@/lib/http/request-meta';
 import { toFieldIssues, type FieldIssue } from '@/lib/validation/issues';
 
 export function jsonError(status: number, errors: FieldIssue[] | string): Response {
@@ -56,11 +58,20 @@ export function apiRoute<P = Record<string, never>>(roles: RoleSet, handler: Han
   };
 }
 
-export function errorResponse(error: unknown): Response {
+export async function errorResponse(error: unknown): Promise<Response> {
   if (error instanceof AuthError) return jsonError(error.status, error.message);
   if (error instanceof BodyError) return jsonError(400, [error.issue]);
   if (error instanceof z.ZodError) return jsonError(400, toFieldIssues(error));
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ConflictError) return jsonError(error.status, [{ path: error.field, message: error.message }]);
+  if (error instanceof UnavailableError) return unavailable(error.message, error.retryAfterS);
+  if (isDatabaseUnreachable(error)) return unavailable(DATABASE_UNREACHABLE, 5);
   throw error;
+}
+
+const DATABASE_UNREACHABLE = 'The database cannot be reached just now, so the request was not completed. Try again in a minute.';
+
+/** 503 in the shape of every server-side failure, with the request id for the logs and a time to retry after. */
+async function unavailable(message: string, retryAfterS: number): Promise<Response> {
+  return Response.json({ error: message, request_id: await requestId() }, { status: 503, headers: { 'retry-after': String(retryAfterS) } });
 }
