@@ -9,7 +9,9 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const outdir = path.join(root, '.build');
 
 /** Each entry becomes .build/<name>.mjs. Add new worker or command-line entry points here. */
-export const ENTRIES = {};
+export const ENTRIES = {
+  'drop-worker': 'lib/compute/drop-worker.ts',
+};
 
 // tsconfig maps "odex" to its hand-written declaration file for type checking; the bundle wants the package.
 const realOdex = {
