@@ -10,20 +10,27 @@ types.setTypeParser(types.builtins.DATE, (value: string) => value);
  * A dead or unreachable database must give a quick 503, not a request that hangs (knex waits a minute for a
  * connection by default, and a query on a connection whose host vanished waits for TCP to give up, many minutes):
  * - a new connection gets CONNECT_TIMEOUT_MS, and a request waits at most ACQUIRE_TIMEOUT_MS for one from the pool;
- * - a connection on which nothing arrives or leaves for SILENCE_MS is dropped, which fails the query it carries.
- *   Idle connections leave the pool after IDLE_MS, sooner, so only a connection in use can fall silent that long;
- *   the longest quiet spell in normal work (computing a 20,000-row import inside its transaction) is a few seconds.
+ * - a connection whose query has had no byte back for SILENCE_MS is dropped, which fails that query. Only a query
+ *   waiting for its answer counts: a transaction computing between statements (a 20,000-row import) stays quiet
+ *   for as long as it needs. pg's own query_timeout is not enough: it fails the query but leaves the connection
+ *   waiting for the lost reply, so the pool would hand the dead connection to the next request.
  */
 const CONNECT_TIMEOUT_MS = 3000;
 const ACQUIRE_TIMEOUT_MS = 5000;
 const IDLE_MS = 10_000;
-const SILENCE_MS = 20_000;
+const SILENCE_MS = 30_000;
 
-type PgClient = { connection: { stream: Socket } };
+type PgClient = { connection: { stream: Socket }; _getActiveQuery?: () => unknown };
 
 function dropWhenSilent(client: PgClient, done: (error: Error | null, client: PgClient) => void): void {
   const socket = client.connection.stream;
-  socket.setTimeout(SILENCE_MS, () => socket.destroy(new Error(`Connection terminated: nothing from the database for ${SILENCE_MS / 1000} s`)));
+  socket.setTimeout(SILENCE_MS);
+  // A listener with `on`, not setTimeout's callback (a `once`): the timer re-arms at the next byte after firing.
+  socket.on('timeout', () => {
+    // A pg without this hook is treated as always waiting for an answer.
+    const waiting = typeof client._getActiveQuery === 'function' ? client._getActiveQuery() != null : true;
+    if (waiting) socket.destroy(new Error(`Connection terminated: no answer from the database for ${SILENCE_MS / 1000} s`));
+  });
   done(null, client);
 }
 
