@@ -64,14 +64,18 @@ export async function errorResponse(error: unknown): Promise<Response> {
   if (error instanceof z.ZodError) return jsonError(400, toFieldIssues(error));
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ConflictError) return jsonError(error.status, [{ path: error.field, message: error.message }]);
-  if (error instanceof UnavailableError) return unavailable(error.message, error.retryAfterS);
-  if (isDatabaseUnreachable(error)) return unavailable(DATABASE_UNREACHABLE, 5);
+  if (error instanceof UnavailableError) return unavailable(error, error.message, error.retryAfterS);
+  if (isDatabaseUnreachable(error)) return unavailable(error, DATABASE_UNREACHABLE, 5);
   throw error;
 }
 
 const DATABASE_UNREACHABLE = 'The database cannot be reached just now, so the request was not completed. Try again in a minute.';
 
 /** 503 in the shape of every server-side failure, with the request id for the logs and a time to retry after. */
-async function unavailable(message: string, retryAfterS: number): Promise<Response> {
-  return Response.json({ error: message, request_id: await requestId() }, { status: 503, headers: { 'retry-after': String(retryAfterS) } });
+async function unavailable(cause: unknown, message: string, retryAfterS: number): Promise<Response> {
+  const id = await requestId();
+  // The code and message only: a driver's error can carry the statement's parameters, and so a user's input.
+  const { code, message: reason } = cause as { code?: string; message?: string };
+  console.error(JSON.stringify({ level: 'error', msg: 'answered 503', request_id: id, code, reason: String(reason).split(' - ').pop() }));
+  return Response.json({ error: message, request_id: id }, { status: 503, headers: { 'retry-after': String(retryAfterS) } });
 }
