@@ -4,7 +4,8 @@ import { NEXT_ACTION_BODY_LIMIT } from './lib/http/limits';
 const nextConfig: NextConfig = {
   // The test command builds into its own folder so it never overwrites a running demo's build.
   distDir: process.env.PLUMBLINE_DIST_DIR || '.next',
-  serverExternalPackages: ['knex'],
+  // knex: Turbopack cannot bundle its optional drivers. piscina: it starts worker threads from files in .build/.
+  serverExternalPackages: ['knex', 'piscina'],
   poweredByHeader: false,
   experimental: {
     authInterrupts: true,

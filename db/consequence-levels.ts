@@ -3,6 +3,7 @@ import type { ConsequenceLevel } from '@/lib/register/model';
 import type { LadderInput } from '@/lib/validation/consequence-level';
 import { appendAudit } from './audit';
 import { getDb } from './knex';
+import { lockItems, lockOrganisation } from './locks';
 import type { Conn } from './types';
 
 const COLUMNS = ['id', 'rank', 'name', 'lower_bound_j', 'colour', 'guidance', 'source'] as const;
@@ -39,7 +40,9 @@ export async function replaceLadder(
   conn: Conn = getDb(),
 ): Promise<{ ladder: ConsequenceLevel[]; reclassified: number }> {
   return conn.transaction(async (trx) => {
-    await trx.raw('SELECT id FROM organisations WHERE id = ? FOR UPDATE', [organisationId]);
+    // Exclusive on the organisation: every register write holds it shared, so none is half-way through an item.
+    await lockOrganisation(trx, organisationId, 'exclusive');
+    await lockItems(trx, organisationId, { organisation: true });
     const before = await listLadder(organisationId, trx);
     await trx('items').where({ organisation_id: organisationId }).update({ consequence_level_id: null });
     await trx('consequence_levels').where({ organisation_id: organisationId }).delete();

@@ -7,6 +7,7 @@ import { isUuid } from '@/lib/validation/ids';
 import { appendAudit } from './audit';
 import { listLadder } from './consequence-levels';
 import { getDb } from './knex';
+import { lockItems, lockLevel, lockOrganisation, lockSite, lockSiteLevels, siteIdOf } from './locks';
 import type { AuditRow, Conn, ItemRow, LevelRow, SiteRow } from './types';
 
 /** The stored result's columns, written together whenever an item's fall is computed. */
@@ -81,20 +82,14 @@ async function writeResults(trx: Conn, ids: string[], results: ComputedResult[])
 }
 
 /**
- * Recomputes the stored results of the items that match, inside the caller's transaction: whoever changes an
- * input of a fall also rewrites its result before committing, so no stored energy is ever stale.
+ * Recomputes the stored results of the site's or the level's items inside the caller's transaction: whoever changes
+ * an input of a fall also rewrites its result before committing, so no stored energy is ever stale. The caller holds
+ * the site (and the level) locked for a change; the items are locked here, in id order, before they are read.
  */
-export async function recomputeItems(
-  trx: Conn,
-  organisationId: string,
-  scope: { siteId: string } | { levelId: string } | { itemIds: string[] },
-): Promise<number> {
-  const query = settingQuery(trx, organisationId);
-  if ('siteId' in scope) query.where('i.site_id', scope.siteId);
-  else if ('levelId' in scope) query.where('i.level_id', scope.levelId);
-  else query.whereIn('i.id', scope.itemIds);
-  const rows: SettingRow[] = await query;
-  if (!rows.length) return 0;
+export async function recomputeItems(trx: Conn, organisationId: string, scope: { siteId: string } | { levelId: string }): Promise<number> {
+  const ids = await lockItems(trx, organisationId, scope);
+  if (!ids.length) return 0;
+  const rows: SettingRow[] = await settingQuery(trx, organisationId).whereRaw('i.id = ANY(?::uuid[])', [ids]);
   const ladder = await listLadder(organisationId, trx);
   await writeResults(
     trx,
@@ -104,14 +99,20 @@ export async function recomputeItems(
   return rows.length;
 }
 
-async function lockedLevel(trx: Conn, organisationId: string, siteId: string, levelId: string): Promise<LevelRow & Pick<SiteRow, 'altitude_m' | 'design_wind_m_s' | 'current_m_s'>> {
-  const level = await trx('site_levels as l')
-    .join('sites as s', 's.id', 'l.site_id')
-    .where({ 'l.id': levelId, 'l.site_id': siteId, 'l.organisation_id': organisationId })
-    .forShare()
-    .first('l.*', 's.altitude_m', 's.design_wind_m_s', 's.current_m_s');
+/** The level an item is written to, locked after its site, with the site's conditions: what the fall is computed from. */
+async function lockedSetting(trx: Conn, organisationId: string, site: SiteRow, levelId: string): Promise<LevelRow & FallSetting> {
+  const level = await lockLevel(trx, organisationId, site.id, levelId, 'share');
   if (!level) throw new ConflictError('level_id', 'Level must be one of this site’s levels.', 422);
-  return level;
+  return { ...level, altitude_m: site.altitude_m, design_wind_m_s: site.design_wind_m_s, current_m_s: site.current_m_s };
+}
+
+/** Locks the organisation and the site of an existing item, in that order; the item itself comes after its level. */
+async function lockItemSite(trx: Conn, organisationId: string, itemId: string): Promise<SiteRow> {
+  await lockOrganisation(trx, organisationId, 'share');
+  const siteId = await siteIdOf(trx, 'items', organisationId, itemId);
+  const site = siteId ? await lockSite(trx, organisationId, siteId, 'share') : undefined;
+  if (!site) throw new NotFoundError('No such item');
+  return site;
 }
 
 function toRow(input: ItemInput) {
@@ -120,9 +121,10 @@ function toRow(input: ItemInput) {
 
 export async function createItem(organisationId: string, actorUserId: string, siteId: string, input: ItemInput, conn: Conn = getDb()): Promise<ItemRow> {
   return conn.transaction(async (trx) => {
-    const site = await trx('sites').where({ id: siteId, organisation_id: organisationId }).first('id');
+    await lockOrganisation(trx, organisationId, 'share');
+    const site = await lockSite(trx, organisationId, siteId, 'share');
     if (!site) throw new NotFoundError('No such site');
-    const setting = await lockedLevel(trx, organisationId, siteId, input.level_id);
+    const setting = await lockedSetting(trx, organisationId, site, input.level_id);
     const result = computeItem(input, setting, await listLadder(organisationId, trx));
     const [row] = await trx('items')
       .insert({ ...toRow(input), ...result, computed_at: trx.fn.now(), organisation_id: organisationId, site_id: siteId })
@@ -135,9 +137,10 @@ export async function createItem(organisationId: string, actorUserId: string, si
 
 export async function updateItem(organisationId: string, actorUserId: string, itemId: string, input: ItemInput, conn: Conn = getDb()): Promise<ItemRow> {
   return conn.transaction(async (trx) => {
+    const site = await lockItemSite(trx, organisationId, itemId);
+    const setting = await lockedSetting(trx, organisationId, site, input.level_id);
     const before: ItemRow | undefined = await trx('items').where({ id: itemId, organisation_id: organisationId }).forUpdate().first();
     if (!before) throw new NotFoundError('No such item');
-    const setting = await lockedLevel(trx, organisationId, before.site_id, input.level_id);
     const result = computeItem(input, setting, await listLadder(organisationId, trx));
     const [row] = await trx('items')
       .where({ id: itemId })
@@ -159,6 +162,7 @@ export async function updateItem(organisationId: string, actorUserId: string, it
 
 export async function deleteItem(organisationId: string, actorUserId: string, itemId: string, conn: Conn = getDb()): Promise<void> {
   await conn.transaction(async (trx) => {
+    await lockItemSite(trx, organisationId, itemId);
     const before: ItemRow | undefined = await trx('items').where({ id: itemId, organisation_id: organisationId }).forUpdate().first();
     if (!before) throw new NotFoundError('No such item');
     await trx('items').where({ id: itemId }).delete();
@@ -179,9 +183,10 @@ export async function importItems(
   conn: Conn = getDb(),
 ): Promise<number> {
   return conn.transaction(async (trx) => {
-    const site: SiteRow | undefined = await trx('sites').where({ id: siteId, organisation_id: organisationId }).forUpdate().first();
+    await lockOrganisation(trx, organisationId, 'share');
+    const site = await lockSite(trx, organisationId, siteId, 'share');
     if (!site) throw new NotFoundError('No such site');
-    const levels: LevelRow[] = await trx('site_levels').where({ site_id: siteId, organisation_id: organisationId });
+    const levels = await lockSiteLevels(trx, organisationId, siteId, 'share');
     const byId = new Map(levels.map((l) => [l.id, l]));
     const ladder = await listLadder(organisationId, trx);
     const rows = inputs.map(({ line, item: input }) => {
@@ -190,6 +195,10 @@ export async function importItems(
       const result = computeItem(input, { ...level, altitude_m: site.altitude_m, design_wind_m_s: site.design_wind_m_s, current_m_s: site.current_m_s }, ladder);
       return { ...toRow(input), ...result, computed_at: trx.fn.now(), organisation_id: organisationId, site_id: siteId };
     });
+    // Two imports that share tags insert them in the same order, so they queue on the unique index instead of
+    // waiting for each other in a cycle.
+    const tagKey = (row: { tag: string }) => row.tag.toLowerCase();
+    rows.sort((a, b) => (tagKey(a) < tagKey(b) ? -1 : tagKey(a) > tagKey(b) ? 1 : 0));
     const CHUNK = 1000;
     for (let start = 0; start < rows.length; start += CHUNK) {
       await trx('items').insert(rows.slice(start, start + CHUNK)).catch((e) => duplicateTag(e));

@@ -3,6 +3,7 @@ import type { LevelInput } from '@/lib/validation/level';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';
 import { getDb } from './knex';
+import { lockLevel, lockOrganisation, lockSite, siteIdOf, type LockMode } from './locks';
 import type { Conn, LevelRow } from './types';
 
 export interface LevelListing extends LevelRow {
@@ -20,6 +21,16 @@ function toColumns(input: LevelInput) {
 
 const pick = ({ name, floor_height_m, surface, water_depth_m, notes }: Partial<LevelRow>) => ({ name, floor_height_m, surface, water_depth_m, notes });
 
+/** Locks the organisation, the level's site and then the level, in the order every register write takes them. */
+async function lockLevelWithSite(trx: Conn, organisationId: string, levelId: string, mode: LockMode): Promise<LevelRow> {
+  await lockOrganisation(trx, organisationId, 'share');
+  const siteId = await siteIdOf(trx, 'site_levels', organisationId, levelId);
+  const site = siteId ? await lockSite(trx, organisationId, siteId, 'share') : undefined;
+  const level = site ? await lockLevel(trx, organisationId, site.id, levelId, mode) : undefined;
+  if (!level) throw new NotFoundError('No such level');
+  return level;
+}
+
 /** Highest first, the way a survey walks a structure from the top down. */
 export async function listLevels(organisationId: string, siteId: string, conn: Conn = getDb()): Promise<LevelListing[]> {
   const rows: (LevelRow & { line_count: string })[] = await conn('site_levels as l')
@@ -34,7 +45,8 @@ export async function listLevels(organisationId: string, siteId: string, conn: C
 
 export async function createLevel(organisationId: string, actorUserId: string, siteId: string, input: LevelInput, conn: Conn = getDb()): Promise<LevelRow> {
   return conn.transaction(async (trx) => {
-    const site = await trx('sites').where({ id: siteId, organisation_id: organisationId }).forShare().first('id');
+    await lockOrganisation(trx, organisationId, 'share');
+    const site = await lockSite(trx, organisationId, siteId, 'share');
     if (!site) throw new NotFoundError('No such site');
     const [level] = await trx<LevelRow>('site_levels')
       .insert({ ...toColumns(input), site_id: siteId, organisation_id: organisationId })
@@ -54,8 +66,7 @@ export async function updateLevel(
   conn: Conn = getDb(),
 ): Promise<{ level: LevelRow; recomputed: number }> {
   return conn.transaction(async (trx) => {
-    const before = await trx<LevelRow>('site_levels').where({ id: levelId, organisation_id: organisationId }).forUpdate().first();
-    if (!before) throw new NotFoundError('No such level');
+    const before = await lockLevelWithSite(trx, organisationId, levelId, 'change');
     const [level] = await trx<LevelRow>('site_levels')
       .where({ id: levelId })
       .update({ ...toColumns(input), updated_at: trx.fn.now() })
@@ -79,8 +90,7 @@ export async function updateLevel(
 /** Only an empty level may go: deleting one with items would silently drop them from the register. */
 export async function deleteLevel(organisationId: string, actorUserId: string, levelId: string, conn: Conn = getDb()): Promise<void> {
   await conn.transaction(async (trx) => {
-    const before = await trx<LevelRow>('site_levels').where({ id: levelId, organisation_id: organisationId }).forUpdate().first();
-    if (!before) throw new NotFoundError('No such level');
+    const before = await lockLevelWithSite(trx, organisationId, levelId, 'delete');
     const used = await trx('items').where({ level_id: levelId }).count<{ count: string }[]>('* as count');
     if (Number(used[0].count) > 0) {
       throw new ConflictError('level', `Level "${before.name}" still has ${used[0].count} item(s): move or delete them first.`);

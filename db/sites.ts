@@ -4,6 +4,7 @@ import type { SiteInput } from '@/lib/validation/site';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';
 import { getDb } from './knex';
+import { lockItems, lockOrganisation, lockSite, lockSiteLevels } from './locks';
 import type { Conn, SiteRow } from './types';
 
 export interface SiteListing extends SiteRow {
@@ -78,6 +79,7 @@ export async function findSite(organisationId: string, siteId: string, conn: Con
 
 export async function createSite(organisationId: string, actorUserId: string, input: SiteInput, conn: Conn = getDb()): Promise<SiteRow> {
   return conn.transaction(async (trx) => {
+    await lockOrganisation(trx, organisationId, 'share');
     const [site] = await trx<SiteRow>('sites')
       .insert({ ...toColumns(input), organisation_id: organisationId })
       .returning('*')
@@ -96,7 +98,8 @@ export async function updateSite(
   conn: Conn = getDb(),
 ): Promise<{ site: SiteRow; recomputed: number }> {
   return conn.transaction(async (trx) => {
-    const before = await trx<SiteRow>('sites').where({ id: siteId, organisation_id: organisationId }).forUpdate().first();
+    await lockOrganisation(trx, organisationId, 'share');
+    const before = await lockSite(trx, organisationId, siteId, 'change');
     if (!before) throw new NotFoundError('No such site');
     const [site] = await trx<SiteRow>('sites')
       .where({ id: siteId })
@@ -120,9 +123,11 @@ export async function updateSite(
 
 export async function deleteSite(organisationId: string, actorUserId: string, siteId: string, conn: Conn = getDb()): Promise<void> {
   await conn.transaction(async (trx) => {
-    const before = await trx<SiteRow>('sites').where({ id: siteId, organisation_id: organisationId }).forUpdate().first();
+    await lockOrganisation(trx, organisationId, 'share');
+    const before = await lockSite(trx, organisationId, siteId, 'delete');
     if (!before) throw new NotFoundError('No such site');
-    const lines = await trx('items').where({ site_id: siteId }).count<{ count: string }[]>('* as count');
+    await lockSiteLevels(trx, organisationId, siteId, 'delete');
+    const lines = (await lockItems(trx, organisationId, { siteId })).length;
     await trx('items').where({ site_id: siteId }).delete();
     await trx('site_levels').where({ site_id: siteId }).delete();
     await trx('sites').where({ id: siteId }).delete();
@@ -132,7 +137,7 @@ export async function deleteSite(organisationId: string, actorUserId: string, si
       action: 'site.deleted',
       entityType: 'site',
       entityId: siteId,
-      before: { ...pick(before), items: Number(lines[0].count) },
+      before: { ...pick(before), items: lines },
     });
   });
 }

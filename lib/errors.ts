@@ -17,3 +17,17 @@ export class NotFoundError extends Error {
     this.name = 'NotFoundError';
   }
 }
+
+/**
+ * The service cannot take the request just now but will again soon (HTTP 503 with Retry-After): the solver's queue
+ * is full, say. The message tells the user what to do.
+ */
+export class UnavailableError extends Error {
+  constructor(
+    message: string,
+    public readonly retryAfterS: number,
+  ) {
+    super(message);
+    this.name = 'UnavailableError';
+  }
+}

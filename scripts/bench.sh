@@ -35,3 +35,5 @@ for _ in $(seq 1 60); do
 done
 log "register"
 BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/register.ts
+log "drops and health under load"
+BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/drops.ts

@@ -11,6 +11,7 @@ const outdir = path.join(root, '.build');
 /** Each entry becomes .build/<name>.mjs. Add new worker or command-line entry points here. */
 export const ENTRIES = {
   server: 'server/main.ts',
+  'drop-worker': 'lib/compute/drop-worker.ts',
 };
 
 // tsconfig maps "odex" to its hand-written declaration file for type checking; the bundle wants the package.

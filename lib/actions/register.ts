@@ -17,6 +17,7 @@ import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { unitsField } from '@/lib/validation/quantity';
 import { siteSchema } from '@/lib/validation/site';
+import { outageSafe } from './outage';
 import type { ActionState } from './state';
 
 const CHECK = 'Check the highlighted fields.';
@@ -48,7 +49,7 @@ function read(form: FormData): FormInput {
   }
 }
 
-export async function saveSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveSiteAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { values, units, id, refused } = read(form);
   if (refused) return refused;
@@ -68,9 +69,9 @@ export async function saveSiteAction(_prev: ActionState, form: FormData): Promis
   }
   revalidatePath('/sites');
   redirect(`/sites/${siteId}`);
-}
+});
 
-export async function deleteSiteAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const deleteSiteAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { id, refused } = read(form);
   if (refused) return refused;
@@ -82,9 +83,9 @@ export async function deleteSiteAction(_prev: ActionState, form: FormData): Prom
   }
   revalidatePath('/sites');
   redirect('/sites');
-}
+});
 
-export async function saveLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveLevelAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { values, units, id, siteId, refused } = read(form);
   if (refused) return refused;
@@ -104,9 +105,9 @@ export async function saveLevelAction(_prev: ActionState, form: FormData): Promi
   } catch (error) {
     return known(error, id ? 'level' : 'site');
   }
-}
+});
 
-export async function deleteLevelAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const deleteLevelAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { id, siteId, refused } = read(form);
   if (refused) return refused;
@@ -118,9 +119,9 @@ export async function deleteLevelAction(_prev: ActionState, form: FormData): Pro
   } catch (error) {
     return known(error, 'level');
   }
-}
+});
 
-export async function saveItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveItemAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { values, units, id, siteId, refused } = read(form);
   if (refused) return refused;
@@ -141,9 +142,9 @@ export async function saveItemAction(_prev: ActionState, form: FormData): Promis
   }
   revalidatePath(`/sites/${siteId}`);
   redirect(`/items/${itemId}?added=1`);
-}
+});
 
-export async function deleteItemAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const deleteItemAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(EDITORS);
   const { id, siteId, refused } = read(form);
   if (refused) return refused;
@@ -155,9 +156,9 @@ export async function deleteItemAction(_prev: ActionState, form: FormData): Prom
   }
   revalidatePath(`/sites/${siteId}`);
   redirect(isUuid(siteId) ? `/sites/${siteId}` : '/sites');
-}
+});
 
-export async function saveLadderAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+export const saveLadderAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
   const member = await requireRole(['admin']);
   const { values, refused } = read(form);
   if (refused) return refused;
@@ -166,4 +167,4 @@ export async function saveLadderAction(_prev: ActionState, form: FormData): Prom
   const { reclassified } = await replaceLadder(member.organisationId, member.userId, parsed.data);
   revalidatePath('/', 'layout');
   return { ok: true, message: `Ladder saved; ${reclassified} register line(s) reclassified.` };
-}
+});

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { AuthError, requireRole, type RoleSet } from '@/lib/auth';
+import { isDatabaseUnreachable } from '@/db/connection-errors';
 import type { Member } from '@/db/types';
-import { ConflictError, NotFoundError } from '@/lib/errors';
+import { ConflictError, NotFoundError, UnavailableError } from '@/lib/errors';
 import { SERVER_FAULT } from '@/lib/http/messages';
 import { requestId } from '@/lib/http/request-meta';
 import { requestLog } from '@/lib/log';
@@ -112,6 +113,19 @@ export async function errorResponse(error: unknown): Promise<Response> {
   if (error instanceof z.ZodError) return jsonError(400, toFieldIssues(error));
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ConflictError) return jsonError(error.status, [{ path: error.field, message: error.message }]);
+  if (error instanceof UnavailableError) return unavailable(error, error.message, error.retryAfterS);
+  if (isDatabaseUnreachable(error)) return unavailable(error, DATABASE_UNREACHABLE, 5);
   (await requestLog()).error({ err: error }, 'route handler failed');
   return Response.json({ error: SERVER_FAULT, request_id: await requestId().catch(() => 'none') }, { status: 500 });
+}
+
+const DATABASE_UNREACHABLE = 'The database cannot be reached just now, so the request was not completed. Try again in a minute.';
+
+/** 503 in the shape of every server-side failure, with the request id for the logs and a time to retry after. */
+async function unavailable(cause: unknown, message: string, retryAfterS: number): Promise<Response> {
+  const id = await requestId().catch(() => 'none');
+  // The code and message only: a driver's error can carry the statement's parameters, and so a user's input.
+  const { code, message: reason } = cause as { code?: string; message?: string };
+  (await requestLog()).error({ code, reason: String(reason).split(' - ').pop() }, 'answered 503');
+  return Response.json({ error: message, request_id: id }, { status: 503, headers: { 'retry-after': String(retryAfterS) } });
 }
