@@ -33,9 +33,22 @@ function checkName(name: string): void {
   if (name.split('.').some((part) => REFUSED_KEYS.has(part))) throw refusedKey(name);
 }
 
-/** A form's text fields as a null-prototype record; repeated names keep the last value. */
-export function formToObject(form: FormData): Record<string, string> {
+// Duck-typed rather than `instanceof FormData`: the FormData an action receives is built by Next's decoder, whose
+// class need not be this realm's global.
+function isFormLike(value: unknown): value is FormData {
+  if (typeof value !== 'object' || value === null) return false;
+  const form = value as FormData;
+  return typeof form.entries === 'function' && typeof form.getAll === 'function' && typeof form.append === 'function';
+}
+
+/**
+ * A form's text fields as a null-prototype record; repeated names keep the last value. A server action is a public
+ * endpoint whose arguments the client chooses: anything that is not a FormData reads as an empty form, so the schema
+ * names the missing fields instead of the action failing on a number or a list.
+ */
+export function formToObject(form: unknown): Record<string, string> {
   const out: Record<string, string> = Object.create(null);
+  if (!isFormLike(form)) return out;
   for (const [name, value] of form.entries()) {
     checkName(name);
     if (typeof value === 'string') out[name] = value;
@@ -98,7 +111,7 @@ export function unsafeInputFailure(error: UnsafeInputError): { success: false; e
 }
 
 /** `schema.safeParse` of a form's fields: a refused field name fails like any other field, naming it. */
-export function parseForm<S extends z.ZodType>(schema: S, form: FormData): z.ZodSafeParseResult<z.output<S>> {
+export function parseForm<S extends z.ZodType>(schema: S, form: unknown): z.ZodSafeParseResult<z.output<S>> {
   let fields: Record<string, string>;
   try {
     fields = formToObject(form);

@@ -68,6 +68,16 @@ describe('form fields', () => {
     expect(toFieldErrors(r.error)).toEqual({ '__proto__.notes': 'The field name "__proto__.notes" is not accepted.' });
   });
 
+  it('read arguments that are not a form (a client can post any argument list to an action) as an empty form', () => {
+    const schema = z.object({ name: z.string() });
+    for (const argument of [1, [1, 2], null, undefined, 'name=a', { name: 'a' }, true]) {
+      expect(Object.keys(formToObject(argument))).toEqual([]);
+      const r = parseForm(schema, argument);
+      expect(r.success).toBe(false);
+      if (!r.success) expect(Object.keys(toFieldErrors(r.error))).toEqual(['name']);
+    }
+  });
+
   it('keep a refused bare "__proto__" as an error key rather than losing it on the prototype', () => {
     const r = parseForm(z.object({}), form([['__proto__', 'x']]));
     expect(r.success).toBe(false);
