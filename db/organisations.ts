@@ -47,7 +47,7 @@ export async function renameOrganisation(
   conn: Conn = getDb(),
 ): Promise<OrganisationRow> {
   return conn.transaction(async (trx) => {
-    const before = await trx<OrganisationRow>('organisations').where({ id }).first().forUpdate();
+    const before = await trx<OrganisationRow>('organisations').where({ id }).first().forNoKeyUpdate();
     const [after] = await trx<OrganisationRow>('organisations')
       .where({ id })
       .update({ name, updated_at: trx.fn.now() })

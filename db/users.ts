@@ -48,7 +48,7 @@ export async function updateProfile(
   conn: Conn = getDb(),
 ): Promise<PublicUser> {
   return conn.transaction(async (trx) => {
-    const before = await trx('users').where({ id: userId }).first(PUBLIC_COLUMNS).forUpdate();
+    const before = await trx('users').where({ id: userId }).first(PUBLIC_COLUMNS).forNoKeyUpdate();
     const [after] = await trx('users')
       .where({ id: userId })
       .update({ display_name: change.displayName, unit_system: change.unitSystem, updated_at: trx.fn.now() })
