@@ -30,6 +30,14 @@ describe('malformed server actions end as a 4xx', () => {
     await expectRefusal(await post('/sign-in', { 'next-action': SIGN_IN, 'content-type': 'text/plain' }, '["$Q1"]'), 400, /reference/);
   });
 
+  it('an argument list of the wrong shape reaches the action, which reads it as an empty form and names the fields', async () => {
+    for (const args of ['[1,2]', '[]', '[null,"x"]', '[{},{}]']) {
+      const res = await post('/sign-in', { 'next-action': SIGN_IN, accept: 'text/x-component', 'content-type': 'text/plain' }, args);
+      expect(res.status, args).toBeLessThan(500);
+      if (res.status === 200) expect(await res.text(), args).toMatch(/email/i);
+    }
+  });
+
   it('a broken multipart body, with or without the action header', async () => {
     const broken = multipart([['0', '[{},"$K1"]']]).slice(0, -12);
     await expectRefusal(await post('/sign-in', { 'next-action': SIGN_IN, ...MULTIPART }, broken), 400, /Unexpected end of form/);
