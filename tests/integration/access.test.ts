@@ -47,6 +47,8 @@ import {
 } from '@/lib/actions/members';
 import { changePasswordAction, setUnitSystemAction, updateProfileAction } from '@/lib/actions/profile';
 import { startSession } from '@/lib/auth';
+import { SESSION_COOKIE } from '@/lib/auth/config';
+import { requestContext } from './harness/context';
 import { createOrg, ctx, jsonRequest, PASSWORD, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
 
 type Subject = 'anonymous' | 'admin' | 'engineer' | 'reviewer' | 'viewer' | 'foreign admin';
@@ -172,7 +174,7 @@ const CASES: { name: string; run: () => Promise<Outcome>; expected: Record<Subje
     run: () => status(getSessionRoute(jsonRequest('GET'), ctx({}))),
     expected: { anonymous: '401', ...everyoneSignedIn('200') },
   },
-  { name: 'DELETE /api/v1/session', run: () => status(deleteSession()), expected: { anonymous: '204', ...everyoneSignedIn('204') } },
+  { name: 'DELETE /api/v1/session', run: () => status(deleteSession(jsonRequest('DELETE'))), expected: { anonymous: '204', ...everyoneSignedIn('204') } },
   { name: 'page /', run: () => pageOutcome(() => HomePage()), expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) } },
   { name: 'page /members', run: () => pageOutcome(() => MembersPage()), expected: adminOnly() },
   { name: 'page /profile', run: () => pageOutcome(() => ProfilePage()), expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) } },
@@ -383,5 +385,44 @@ describe('every route, page and action against every role', () => {
         expect(await c.run()).toBe(c.expected[subject]);
       });
     }
+  }
+});
+
+/**
+ * Hostile callers (issue 9). A forged session cookie is a stranger, whatever it claims, so every row answers as it
+ * does for the anonymous caller. A write to the API from a page on another site, made with the admin's own cookie,
+ * is refused with 403 before the role check; a read answers as it does for the admin (the browser, not the server,
+ * keeps another site from reading it). Pages and server actions posted from another site are refused by our server
+ * before Next runs them: tests/http/actions.test.ts.
+ */
+const WRITE_ROUTE = /^(POST|PUT|PATCH|DELETE) \/api\//;
+const NativeRequest = globalThis.Request;
+class CrossSiteRequest extends NativeRequest {
+  constructor(input: RequestInfo | URL, init: RequestInit = {}) {
+    const headers = new Headers(init.headers);
+    headers.set('origin', 'https://elsewhere.example');
+    headers.set('sec-fetch-site', 'cross-site');
+    super(input, { ...init, headers });
+  }
+}
+
+describe('every route, page and action against hostile callers', () => {
+  for (const c of CASES) {
+    it(`${c.name} with a forged session cookie → ${c.expected.anonymous}`, async () => {
+      signOutLocally();
+      requestContext.cookies.set(SESSION_COOKIE, `Fe26.2*1*${'Q'.repeat(43)}*${'x'.repeat(40)}*forged`);
+      expect(await c.run()).toBe(c.expected.anonymous);
+    });
+    if (!c.name.includes('/api/')) continue;
+    const expected = WRITE_ROUTE.test(c.name) ? FORBIDDEN : c.expected.admin;
+    it(`${c.name} as the admin, sent from another site → ${expected}`, async () => {
+      await actAs('admin');
+      globalThis.Request = CrossSiteRequest;
+      try {
+        expect(await c.run()).toBe(expected);
+      } finally {
+        globalThis.Request = NativeRequest;
+      }
+    });
   }
 });

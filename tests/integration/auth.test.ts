@@ -102,7 +102,7 @@ describe('sign-in and sign-out', () => {
     expect((await getSessionRoute(jsonRequest('GET'), ctx({}))).status).toBe(401);
 
     await signInAs(org.users.admin.email);
-    expect((await deleteSession()).status).toBe(204);
+    expect((await deleteSession(jsonRequest('DELETE'))).status).toBe(204);
     expect((await getSessionRoute(jsonRequest('GET'), ctx({}))).status).toBe(401);
   });
 

@@ -23,7 +23,9 @@ export async function POST(request: Request): Promise<Response> {
   }
 }
 
-export async function DELETE(): Promise<Response> {
+export async function DELETE(request: Request): Promise<Response> {
+  const refused = refuseCrossSite(request);
+  if (refused) return refused;
   await endSession();
   return new Response(null, { status: 204 });
 }
