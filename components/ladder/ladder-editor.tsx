@@ -9,6 +9,7 @@ import type { UnitSystem } from '@/db/types';
 import { saveLadderAction } from '@/lib/actions/register';
 import type { ActionState } from '@/lib/actions/state';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { writeNumberText } from '@/lib/units/number-text';
 import { LADDER_COLOURS, LADDER_COLOUR_IDS, type ConsequenceLevel, type LadderColour } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 import { ladderSchema } from '@/lib/validation/consequence-level';
@@ -31,7 +32,7 @@ const COLOUR_OPTIONS = LADDER_COLOUR_IDS.map((id) => ({ value: id, label: LADDER
 
 const toRow = (level: Pick<ConsequenceLevel, 'name' | 'lower_bound_j' | 'colour' | 'guidance' | 'source'>): RungValues => ({
   name: level.name,
-  lower_bound_j: String(level.lower_bound_j),
+  lower_bound_j: writeNumberText(level.lower_bound_j),
   colour: level.colour,
   guidance: level.guidance,
   source: level.source,

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { MATERIAL_IDS, material, type MaterialId } from '@/lib/materials';
 import { DRAG_MODELS, SHAPE_IDS, shapeDimensions, shapeProperties, type DragModel, type DropCase, type ShapeId } from '@/lib/physics';
 import { fromSI, toSI } from '@/lib/units';
+import { readNumberText, writeNumberText } from '@/lib/units/number-text';
 import { checkQuantity, type QuantityRule } from '@/lib/validation/quantity';
 import type { UnitSystem } from '@/db/types';
 
@@ -295,11 +296,12 @@ export function convertUnits(v: CalculatorValues, to: UnitSystem): CalculatorVal
   if (v.units === to) return v;
   const out = { ...v, units: to } as Record<string, string>;
   for (const [key, rule] of Object.entries(RULES)) {
-    const raw = (v[key as keyof CalculatorValues] as string).trim();
-    const n = Number(raw);
-    if (!rule.quantity || !raw || !Number.isFinite(n)) continue;
+    const read = readNumberText(v[key as keyof CalculatorValues] as string);
+    // Text that is not a number stays as typed, so its message still shows after the switch.
+    if (!rule.quantity || !read || 'problem' in read || !Number.isFinite(read.value)) continue;
+    const n = read.value;
     const converted = fromSI(rule.quantity, toSI(rule.quantity, n, v.units), to);
-    out[key] = String(Number(converted.toPrecision(6)));
+    out[key] = writeNumberText(converted, 6);
   }
   return out as unknown as CalculatorValues;
 }

@@ -5,6 +5,7 @@ import { DIMENSIONS, dimensionsOf, type ShapeChoice } from '@/lib/calculator/for
 import { fromSI, type Quantity } from '@/lib/units';
 import { itemSchema, type ItemInput } from '@/lib/validation/item';
 import { isRefusedKey } from '@/lib/validation/input';
+import { writeNumberText } from '@/lib/units/number-text';
 import { quantityField } from '@/lib/validation/quantity';
 import { SHAPE_LABELS } from '@/components/calculator/labels';
 import { escapeCell, unescapeCell } from './csv-cells';
@@ -522,7 +523,7 @@ function sortProblems(problems: CsvProblem[], columns: string[]): CsvProblem[] {
 /** Enough digits to read back what was stored, none of the noise of a unit conversion, and no thousands separators. */
 function plain(value: number | null | undefined): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '';
-  return String(Number(value.toPrecision(6)));
+  return writeNumberText(value, 6);
 }
 
 function inUnits(quantity: Quantity, value: number | null | undefined, units: UnitSystem): string {

@@ -1,6 +1,7 @@
 import type { ItemRow, LevelRow, SiteRow, UnitSystem } from '@/db/types';
 import { DIMENSIONS, RULES, dimensionsOf, massSI, type CalculatorValues } from '@/lib/calculator/form';
 import { fromSI, type Quantity } from '@/lib/units';
+import { writeNumberText } from '@/lib/units/number-text';
 
 /**
  * Stored SI rows as the text a form (or a PATCH merge) holds in a unit system. Forms round for reading; a merge
@@ -9,7 +10,7 @@ import { fromSI, type Quantity } from '@/lib/units';
 function show(quantity: Quantity | null, value: number | null | undefined, units: UnitSystem, precise: boolean): string {
   if (value === null || value === undefined) return '';
   const v = quantity ? fromSI(quantity, value, units) : value;
-  return precise ? String(v) : String(Number(v.toPrecision(6)));
+  return writeNumberText(v, precise ? undefined : 6);
 }
 
 export type SiteValues = Record<'name' | 'kind' | 'location' | 'surface' | 'water_depth' | 'altitude' | 'design_wind' | 'current' | 'notes', string>;
@@ -90,7 +91,7 @@ export function itemValuesFromCalculator(v: CalculatorValues): ItemValues {
   let mass = v.mass;
   if (v.massSource === 'material' && v.shape !== 'direct') {
     try {
-      mass = String(Number(fromSI('mass', massSI(v), v.units).toPrecision(6)));
+      mass = writeNumberText(fromSI('mass', massSI(v), v.units), 6);
     } catch {
       mass = '';
     }

