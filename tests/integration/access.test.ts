@@ -172,7 +172,7 @@ const CASES: { name: string; run: () => Promise<Outcome>; expected: Record<Subje
     run: () => status(getSessionRoute(jsonRequest('GET'), ctx({}))),
     expected: { anonymous: '401', ...everyoneSignedIn('200') },
   },
-  { name: 'DELETE /api/v1/session', run: () => status(deleteSession()), expected: { anonymous: '204', ...everyoneSignedIn('204') } },
+  { name: 'DELETE /api/v1/session', run: () => status(deleteSession(jsonRequest('DELETE'))), expected: { anonymous: '204', ...everyoneSignedIn('204') } },
   { name: 'page /', run: () => pageOutcome(() => HomePage()), expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) } },
   { name: 'page /members', run: () => pageOutcome(() => MembersPage()), expected: adminOnly() },
   { name: 'page /profile', run: () => pageOutcome(() => ProfilePage()), expected: { anonymous: SIGN_IN, ...everyoneSignedIn(OK) } },
