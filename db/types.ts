@@ -117,3 +117,13 @@ export interface ItemRow extends Omit<StoredResult, 'computed_at'> {
   created_at: Date;
   updated_at: Date;
 }
+
+export interface SessionRow {
+  id_hash: string;
+  user_id: string;
+  organisation_id: string;
+  created_at: Date;
+  last_seen_at: Date;
+  expires_at: Date;
+  revoked_at: Date | null;
+}

@@ -12,6 +12,7 @@ const outdir = path.join(root, '.build');
 export const ENTRIES = {
   server: 'server/main.ts',
   'drop-worker': 'lib/compute/drop-worker.ts',
+  'hash-worker': 'lib/auth/hash-worker.ts',
 };
 
 // tsconfig maps "odex" to its hand-written declaration file for type checking; the bundle wants the package.

@@ -3,7 +3,7 @@
 import { redirect } from 'next/navigation';
 import { createOrganisationWithAdmin } from '@/db/organisations';
 import { findUserByEmail } from '@/db/users';
-import { ConflictError } from '@/lib/errors';
+import { ConflictError, UnavailableError } from '@/lib/errors';
 import { authenticate, endSession, hashPassword, startSession } from '@/lib/auth';
 import { parseForm } from '@/lib/validation/input';
 import { toFieldErrors } from '@/lib/validation/issues';
@@ -14,7 +14,14 @@ import type { ActionState } from './state';
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   const parsed = parseForm(signInSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
-  const outcome = await authenticate(parsed.data.email, parsed.data.password);
+  let outcome;
+  try {
+    outcome = await authenticate(parsed.data.email, parsed.data.password);
+  } catch (error) {
+    // The hashing pool is full: the form says so and when to try again, as the route's 503 does.
+    if (error instanceof UnavailableError) return { message: error.message };
+    throw error;
+  }
   if (!outcome.ok) return { message: outcome.message };
   await startSession(outcome.member.userId, outcome.member.organisationId);
   redirect(outcome.member.mustChangePassword ? '/profile?welcome=1' : '/');
@@ -37,6 +44,7 @@ export async function signUpAction(_prev: ActionState, form: FormData): Promise<
     });
   } catch (error) {
     if (error instanceof ConflictError) return { errors: { [error.field]: error.message } };
+    if (error instanceof UnavailableError) return { message: error.message };
     throw error;
   }
   const { organisation, user } = created;

@@ -1,8 +1,10 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { redirect } from 'next/navigation';
 import { findUserById, updatePasswordHash, updateProfile } from '@/db/users';
-import { hashPassword, requireRole, verifyPassword } from '@/lib/auth';
+import { endEverySession, endOtherSessions, hashPassword, requireRole, verifyPassword } from '@/lib/auth';
+import { UnavailableError } from '@/lib/errors';
 import { parseForm } from '@/lib/validation/input';
 import { toFieldErrors } from '@/lib/validation/issues';
 import { passwordChangeSchema, profileSchema } from '@/lib/validation/user';
@@ -22,12 +24,26 @@ export async function changePasswordAction(_prev: ActionState, form: FormData): 
   const parsed = parseForm(passwordChangeSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   const user = await findUserById(me.userId);
-  if (!user || !(await verifyPassword(parsed.data.currentPassword, user.password_hash))) {
-    return { errors: { currentPassword: 'The current password is not right.' } };
+  try {
+    if (!user || !(await verifyPassword(parsed.data.currentPassword, user.password_hash))) {
+      return { errors: { currentPassword: 'The current password is not right.' } };
+    }
+    await updatePasswordHash(me.userId, me.organisationId, await hashPassword(parsed.data.newPassword));
+  } catch (error) {
+    if (error instanceof UnavailableError) return { message: error.message };
+    throw error;
   }
-  await updatePasswordHash(me.userId, me.organisationId, await hashPassword(parsed.data.newPassword));
+  // Whoever else held a session (a copied cookie, a forgotten device) signs in again, with the new password.
+  await endOtherSessions(me.userId);
   revalidatePath('/', 'layout');
-  return { ok: true, message: 'Password changed.' };
+  return { ok: true, message: 'Password changed. Other devices are signed out.' };
+}
+
+/** Ends every session of this user, this one too, and returns to the sign-in page. */
+export async function signOutEverywhereAction(): Promise<void> {
+  const me = await requireRole('any');
+  await endEverySession(me.userId);
+  redirect('/sign-in');
 }
 
 /** The calculator's unit switch remembers the choice in the profile. */

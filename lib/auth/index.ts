@@ -1,4 +1,4 @@
-export { AuthError, endSession, getSession, requireRole, startSession } from './session';
+export { AuthError, endEverySession, endOtherSessions, endSession, getSession, requireRole, startSession } from './session';
 export type { RoleSet, SessionData } from './session';
 export { authenticate, WRONG_CREDENTIALS } from './sign-in';
 export { hashPassword, temporaryPassword, verifyPassword } from './password';

@@ -1,21 +1,26 @@
 import { randomInt } from 'node:crypto';
-import bcrypt from 'bcryptjs';
+import { runHash } from './hash-pool';
 
 export const BCRYPT_COST = 12;
 
+/** On the hashing pool (lib/auth/hash-pool.ts); throws UnavailableError when it is full. */
 export function hashPassword(plain: string): Promise<string> {
-  return bcrypt.hash(plain, BCRYPT_COST);
+  return runHash<string>({ op: 'hash', plain, cost: BCRYPT_COST });
 }
 
 export function verifyPassword(plain: string, hash: string): Promise<boolean> {
-  return bcrypt.compare(plain, hash);
+  return runHash<boolean>({ op: 'compare', plain, hash });
 }
 
-// Compared against when an e-mail is unknown, so a wrong e-mail costs the same time as a wrong password.
-const UNKNOWN_USER_HASH = bcrypt.hashSync('plumbline-no-such-user', BCRYPT_COST);
+/**
+ * Compared against when an e-mail is unknown, so a wrong e-mail costs the same time as a wrong password. A fixed
+ * cost-12 hash of a random string no one kept: computing one at start-up would block the event loop for a quarter
+ * of a second.
+ */
+export const UNKNOWN_USER_HASH = '$2b$12$33OgqnRjCiRuEfOxiYGBAet88lGRUioyvX9JzShh5V7RWCbzvE5FK';
 
 export function burnPasswordCheck(plain: string): Promise<boolean> {
-  return bcrypt.compare(plain, UNKNOWN_USER_HASH);
+  return verifyPassword(plain, UNKNOWN_USER_HASH);
 }
 
 // No 0/O, 1/l/I: the admin reads this aloud or copies it by hand to the new member.

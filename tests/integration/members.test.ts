@@ -37,7 +37,7 @@ describe('members', () => {
       newPassword: 'pats-own-password',
       confirmPassword: 'pats-own-password',
     });
-    expect(changed).toEqual({ kind: 'state', state: { ok: true, message: 'Password changed.' } });
+    expect(changed).toEqual({ kind: 'state', state: { ok: true, message: 'Password changed. Other devices are signed out.' } });
     signOutLocally();
     expect(await runAction(signInAction, { email: 'pat@test.example', password: secret! })).toMatchObject({ kind: 'state' });
     expect(await runAction(signInAction, { email: 'pat@test.example', password: 'pats-own-password' })).toEqual({

@@ -48,5 +48,6 @@ class CookieJar {
 
 export const requestContext = {
   cookies: new CookieJar(),
-  headers: new Headers({ 'x-forwarded-for': '203.0.113.10' }),
+  // The address the server (server/client-address.ts) would have taken from the socket.
+  headers: new Headers({ 'x-plumbline-client-address': '203.0.113.10' }),
 };

@@ -4,12 +4,13 @@ import type { Role } from '@/db/types';
 import type { ActionState } from '@/lib/actions/state';
 import { hashPassword } from '@/lib/auth/password';
 import { POST as postSession } from '@/app/api/v1/session/route';
+import { CLIENT_ADDRESS_HEADER } from '@/lib/http/header-names';
 import { requestContext } from './context';
 
 export const PASSWORD = 'correct-horse-battery';
 
 export async function resetDatabase(): Promise<void> {
-  await getDb().raw('TRUNCATE organisations, users, memberships, audit_log, sign_in_attempts, consequence_levels, sites, site_levels, items RESTART IDENTITY CASCADE');
+  await getDb().raw('TRUNCATE organisations, users, memberships, sessions, audit_log, sign_in_attempts, consequence_levels, sites, site_levels, items RESTART IDENTITY CASCADE');
 }
 
 let sharedHash: string | undefined;
@@ -43,8 +44,9 @@ export function signOutLocally(): void {
   requestContext.cookies.clear();
 }
 
+/** The caller's address as the server passes it to the app (CLIENT_ADDRESS_HEADER), as if from the socket. */
 export function setClientAddress(address: string): void {
-  requestContext.headers.set('x-forwarded-for', address);
+  requestContext.headers.set(CLIENT_ADDRESS_HEADER, address);
 }
 
 export function jsonRequest(method: string, body?: unknown, url = 'http://127.0.0.1/api'): Request {

@@ -13,7 +13,7 @@ export async function POST(request: Request): Promise<Response> {
     const outcome = await authenticate(input.email, input.password);
     if (!outcome.ok) {
       const response = jsonError(outcome.status, outcome.message);
-      if (outcome.retryAfterMinutes) response.headers.set('Retry-After', String(outcome.retryAfterMinutes * 60));
+      if (outcome.retryAfterS) response.headers.set('Retry-After', String(outcome.retryAfterS));
       return response;
     }
     await startSession(outcome.member.userId, outcome.member.organisationId);
@@ -23,9 +23,14 @@ export async function POST(request: Request): Promise<Response> {
   }
 }
 
+/** Sign-out: the session row is revoked, so copies of the cookie end too. A page on another site cannot do it. */
 export async function DELETE(request: Request): Promise<Response> {
   const refused = refuseCrossSite(request);
   if (refused) return refused;
-  await endSession();
-  return new Response(null, { status: 204 });
+  try {
+    await endSession();
+    return new Response(null, { status: 204 });
+  } catch (error) {
+    return errorResponse(error);
+  }
 }
