@@ -1,5 +1,5 @@
+import type { ConsequenceLevel } from '@/lib/domain';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
-import type { ConsequenceLevel } from '@/lib/register/model';
 import type { LadderInput } from '@/lib/validation/consequence-level';
 import { appendAudit } from './audit';
 import { getDb } from './knex';

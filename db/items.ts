@@ -1,5 +1,5 @@
+import type { RegisterRow } from '@/lib/domain';
 import { computeItem, fallHeight, type ComputedResult, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
-import type { RegisterRow } from '@/lib/register/model';
 import type { RegisterExportRow } from '@/lib/register/csv';
 import type { ItemInput } from '@/lib/validation/item';
 import { ConflictError, NotFoundError } from '@/lib/errors';

@@ -1,15 +1,9 @@
 import Link from 'next/link';
 import { Wordmark } from '@/components/brand/plumbline-mark';
 import type { Member } from '@/db/types';
+import { ROLE_LABELS } from '@/lib/domain';
 import { signOutAction } from '@/lib/actions/auth';
 import { NavLink } from './nav-link';
-
-export const ROLE_LABELS = {
-  admin: 'Admin',
-  engineer: 'Engineer',
-  reviewer: 'Reviewer',
-  viewer: 'Viewer',
-} as const;
 
 export function AppHeader({ member }: { member: Member }) {
   return (

@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import type { Role } from '@/db/types';
+import type { Role } from '@/lib/domain';
 
 interface Panel {
   title: string;

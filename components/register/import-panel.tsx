@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useCallback, useEffect, useId, useMemo, useRef, useState, type ReactNode } from 'react';
 import { ErrorCode, useDropzone, type FileRejection } from 'react-dropzone';
-import { DIMENSIONS } from '@/lib/calculator/form';
+import { DIMENSIONS } from '@/lib/domain';
 import { CSV_LIMITS, type CsvProblem } from '@/lib/register/csv';
 import { SafetyNote } from '@/components/layout/safety-note';
 

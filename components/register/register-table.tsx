@@ -2,6 +2,7 @@
 
 import Link from 'next/link';
 import { useDeferredValue, useEffect, useId, useMemo, useRef, useState, type ReactNode } from 'react';
+import { CATEGORY_LABELS, type ConsequenceLevel, type RegisterViewRow, SECURING, SECURING_LABELS, SHAPE_LABELS, type SiteLevelRef, type UnitSystem } from '@/lib/domain';
 import {
   flexRender,
   getCoreRowModel,
@@ -16,16 +17,6 @@ import {
   type Row,
   type SortingFn,
 } from '@tanstack/react-table';
-import type { UnitSystem } from '@/db/types';
-import { SHAPE_LABELS } from '@/components/calculator/labels';
-import {
-  CATEGORY_LABELS,
-  SECURING,
-  SECURING_LABELS,
-  type ConsequenceLevel,
-  type RegisterViewRow,
-  type SiteLevelRef,
-} from '@/lib/register/model';
 import { formatQuantity, unitLabel, type Quantity } from '@/lib/units';
 import { ConsequenceBadge } from './consequence-badge';
 import { ladderById, ladderInOrder } from './ladder';

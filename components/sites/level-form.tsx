@@ -2,9 +2,9 @@
 
 import { useEffect } from 'react';
 import { useWatch } from 'react-hook-form';
+import type { UnitSystem } from '@/lib/domain';
 import { FormMessage, SelectField, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
-import type { UnitSystem } from '@/db/types';
 import { saveLevelAction } from '@/lib/actions/register';
 import type { LevelValues } from '@/lib/register/form-values';
 import { unitLabel } from '@/lib/units';

@@ -1,9 +1,9 @@
 'use client';
 
 import { useWatch } from 'react-hook-form';
+import type { UnitSystem } from '@/lib/domain';
 import { FormMessage, SelectField, SubmitButton, TextAreaField, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
-import type { UnitSystem } from '@/db/types';
 import { saveSiteAction } from '@/lib/actions/register';
 import type { SiteValues } from '@/lib/register/form-values';
 import { unitLabel } from '@/lib/units';

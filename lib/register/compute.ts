@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { MODEL_VERSION, PhysicsInputError, PhysicsSolveError, simulateDrop, type DropCase, type DropResult, type ShapeId } from '@/lib/physics';
-import type { ConsequenceLevel, StoredResult, Surface } from './model';
+import type { ConsequenceLevel, StoredResult, Surface } from '@/lib/domain';
 
 /** What of an item the fall depends on. */
 export interface ItemPhysics {

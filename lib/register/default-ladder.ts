@@ -1,4 +1,4 @@
-import type { ConsequenceLevel } from './model';
+import type { ConsequenceLevel } from '@/lib/domain';
 
 /**
  * The ladder a new organisation starts with. Each bound sits at a published reference energy, so a level says

@@ -1,5 +1,7 @@
-import type { ItemRow, LevelRow, SiteRow, UnitSystem } from '@/db/types';
-import { DIMENSIONS, RULES, dimensionsOf, massSI, type CalculatorValues } from '@/lib/calculator/form';
+import { DIMENSIONS, REGISTER_RULES, type UnitSystem } from '@/lib/domain';
+import { dimensionsOf } from '@/lib/shape-choice';
+import type { ItemRow, LevelRow, SiteRow } from '@/db/types';
+import { massSI, type CalculatorValues } from '@/lib/calculator/form';
 import { fromSI, type Quantity } from '@/lib/units';
 import { writeNumberText } from '@/lib/units/number-text';
 
@@ -69,7 +71,7 @@ export function itemValues(item: Partial<ItemRow> | null, units: UnitSystem, pre
     quantity: String(item?.quantity ?? 1),
     mass: show('mass', item?.mass_kg, units, precise),
     shape: item?.shape ?? 'tumbling_box',
-    dimensions: Object.fromEntries(DIMENSIONS.map((k) => [k, show(RULES[k].quantity, dims[k], units, precise)])) as ItemValues['dimensions'],
+    dimensions: Object.fromEntries(DIMENSIONS.map((k) => [k, show(REGISTER_RULES[k].quantity, dims[k], units, precise)])) as ItemValues['dimensions'],
     cd: show(null, item?.cd, units, precise),
     area: show('area', item?.area_m2, units, precise),
     volume: show('volume', item?.volume_m3, units, precise),

@@ -1,24 +1,10 @@
 import { create, unitDependencies } from 'mathjs';
-import type { UnitSystem } from '@/db/types';
+import type { Quantity, UnitSystem } from '@/lib/domain/units';
+
+export type { Quantity };
 
 // Conversions go through mathjs's unit system (its definitions are the exact ones of NIST SP 811), not a table of ours.
 const math = create({ unitDependencies });
-
-export type Quantity =
-  | 'length'
-  | 'mass'
-  | 'time'
-  | 'speed'
-  | 'energy'
-  | 'momentum'
-  | 'area'
-  | 'volume'
-  | 'density'
-  | 'viscosity'
-  | 'linearDrag'
-  | 'acceleration'
-  | 'temperature'
-  | 'temperatureDelta';
 
 interface UnitPair {
   /** mathjs unit names */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '@/db/types';
+import { ROLES } from '@/lib/domain';
 import { userFields } from './user';
 
 const role = z.enum(ROLES, { error: 'Role must be admin, engineer, reviewer or viewer.' });

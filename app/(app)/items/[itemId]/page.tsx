@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { SURFACE_LABELS } from '@/lib/domain';
 import { DropResults } from '@/components/calculator/drop-results';
 import { ConfirmForm } from '@/components/forms/confirm-form';
 import { ItemFacts } from '@/components/items/item-facts';
@@ -15,7 +16,6 @@ import { requireRole } from '@/lib/auth';
 import { simulateDrop } from '@/lib/physics';
 import { inputsHash, itemDropCase } from '@/lib/register/compute';
 import { itemValues } from '@/lib/register/form-values';
-import { SURFACE_LABELS } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Item at height' };

@@ -1,9 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { SITE_KIND_LABELS } from '@/lib/domain';
 import { listSites } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
 import { EDITORS } from '@/lib/register/api';
-import { SITE_KIND_LABELS } from '@/lib/register/model';
 
 export const metadata: Metadata = { title: 'Add to register' };
 

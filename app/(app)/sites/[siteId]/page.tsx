@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { SITE_KIND_LABELS, SURFACE_LABELS } from '@/lib/domain';
 import { ConfirmForm } from '@/components/forms/confirm-form';
 import { LevelForm } from '@/components/sites/level-form';
 import { LevelList } from '@/components/sites/level-list';
@@ -14,7 +15,7 @@ import { findSite } from '@/db/sites';
 import { deleteSiteAction } from '@/lib/actions/register';
 import { requireRole } from '@/lib/auth';
 import { levelValues, siteValues } from '@/lib/register/form-values';
-import { SITE_KIND_LABELS, SURFACE_LABELS, packRegister } from '@/lib/register/model';
+import { packRegister } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Site register' };

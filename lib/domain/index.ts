@@ -1,0 +1,6 @@
+/** The vocabulary at the bottom of every layer: plain TypeScript, importing nothing outside lib/domain. */
+export * from './units';
+export * from './roles';
+export * from './register';
+export * from './shapes';
+export * from './quantity-rules';
