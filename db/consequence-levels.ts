@@ -1,4 +1,4 @@
-import type { ConsequenceLevel } from '@/lib/domain';
+import { classify, type ConsequenceLevel } from '@/lib/domain';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
 import type { LadderInput } from '@/lib/validation/consequence-level';
 import { appendAudit } from './audit';
@@ -17,16 +17,24 @@ export async function insertDefaultLadder(trx: Conn, organisationId: string): Pr
   await trx('consequence_levels').insert(DEFAULT_LADDER.map((l) => ({ ...l, organisation_id: organisationId })));
 }
 
-/** Points every item of the organisation at the level its stored energy falls in. */
+/**
+ * Points every item of the organisation at the level its stored energy falls in, by classify() in lib/domain: the
+ * one place the rule is written, so SQL never holds a second copy.
+ */
 export async function reclassifyItems(trx: Conn, organisationId: string): Promise<number> {
-  return trx.raw(
-    `UPDATE items AS i SET consequence_level_id = (
-       SELECT c.id FROM consequence_levels c
-        WHERE c.organisation_id = i.organisation_id AND c.lower_bound_j <= i.effective_energy_j
-        ORDER BY c.lower_bound_j DESC LIMIT 1)
-     WHERE i.organisation_id = ?`,
-    [organisationId],
-  ).then((r: { rowCount: number }) => r.rowCount);
+  const ladder = await listLadder(organisationId, trx);
+  const items: { id: string; effective_energy_j: number | null }[] = await trx('items')
+    .where({ organisation_id: organisationId })
+    .select('id', 'effective_energy_j');
+  if (items.length === 0) return 0;
+  const result: { rowCount: number } = await trx.raw(
+    `UPDATE items AS i SET consequence_level_id = v.level
+       FROM unnest(?::uuid[], ?::uuid[]) AS v(id, level)
+      WHERE i.id = v.id AND i.organisation_id = ?`,
+    // pg sends each JS array as a PostgreSQL array; null entries stay NULL.
+    [items.map((i) => i.id), items.map((i) => classify(i.effective_energy_j, ladder)), organisationId] as unknown as string[],
+  );
+  return result.rowCount;
 }
 
 /**

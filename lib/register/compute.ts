@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { MODEL_VERSION, PhysicsInputError, PhysicsSolveError, simulateDrop, type DropCase, type DropResult, type ShapeId } from '@/lib/physics';
-import type { ConsequenceLevel, StoredResult, Surface } from '@/lib/domain';
+import { classify, type ConsequenceLevel, type StoredResult, type Surface } from '@/lib/domain';
 
 /** What of an item the fall depends on. */
 export interface ItemPhysics {
@@ -69,20 +69,6 @@ function canonical(value: unknown): string {
 /** Identifies the exact inputs of a stored result, model version included, so staleness can be checked. */
 export function inputsHash(dropCase: DropCase): string {
   return createHash('sha256').update(canonical({ model: MODEL_VERSION, case: dropCase })).digest('hex');
-}
-
-/** The level whose bound is the highest at or below the energy; ladders start at 0 J, so there always is one. */
-export function classify(energyJ: number | null, ladder: readonly Pick<ConsequenceLevel, 'id' | 'lower_bound_j'>[]): string | null {
-  if (energyJ === null || !Number.isFinite(energyJ)) return null;
-  let found: string | null = null;
-  let bound = -Infinity;
-  for (const level of ladder) {
-    if (level.lower_bound_j <= energyJ && level.lower_bound_j > bound) {
-      found = level.id;
-      bound = level.lower_bound_j;
-    }
-  }
-  return found;
 }
 
 export type ComputedResult = Omit<StoredResult, 'computed_at'>;

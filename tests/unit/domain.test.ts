@@ -24,8 +24,8 @@ describe('the vocabulary in lib/domain', () => {
 });
 
 describe('the register keeps its own limits', () => {
-  const saved = { mass: CALCULATOR_RULES.mass.max, length: CALCULATOR_RULES.length.max };
   const calc = CALCULATOR_RULES as unknown as Record<'mass' | 'length', { max: number }>;
+  const saved = { mass: calc.mass.max, length: calc.length.max };
   afterEach(() => {
     calc.mass.max = saved.mass;
     calc.length.max = saved.length;
