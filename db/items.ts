@@ -1,9 +1,8 @@
-import type { RegisterRow } from '@/lib/domain';
+import { isUuid, type RegisterRow } from '@/lib/domain';
 import { computeItem, fallHeight, type ComputedResult, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
 import type { RegisterExportRow } from '@/lib/register/csv';
 import type { ItemInput } from '@/lib/validation/item';
 import { ConflictError, NotFoundError } from '@/lib/errors';
-import { isUuid } from '@/lib/validation/ids';
 import { appendAudit } from './audit';
 import { listLadder } from './consequence-levels';
 import { getDb } from './knex';

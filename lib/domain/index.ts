@@ -5,3 +5,4 @@ export * from './register';
 export * from './shapes';
 export * from './quantity-rules';
 export * from './ladder';
+export * from './ids';

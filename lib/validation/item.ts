@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { DIMENSIONS, ITEM_CATEGORIES, REGISTER_RULES, SECURING, type UnitSystem } from '@/lib/domain';
 import { dimensionsOf, SHAPE_CHOICES, type ShapeChoice } from '@/lib/shape-choice';
 import { PhysicsInputError, shapeProperties } from '@/lib/physics';
+import { uuidField } from './ids';
 import { enumField, quantityField, textField } from './quantity';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -45,7 +46,7 @@ export function itemSchema(units: UnitSystem) {
       cd: quantityField(REGISTER_RULES.cd, units, false),
       area: quantityField(REGISTER_RULES.area, units, false),
       volume: quantityField(REGISTER_RULES.volume, units, false),
-      level_id: z.uuid('Level must be one of the site’s levels.'),
+      level_id: uuidField('Level must be one of the site’s levels.'),
       height: quantityField(REGISTER_RULES.releaseHeight, units, false),
       securing: enumField(SECURING, `Securing must be one of: ${SECURING.join(', ')}.`),
       last_inspected: inspectionDate(),
