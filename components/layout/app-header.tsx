@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { can } from '@/lib/auth/policy';
 import { Wordmark } from '@/components/brand/plumbline-mark';
 import type { Member } from '@/db/types';
 import { ROLE_LABELS } from '@/lib/domain';
@@ -17,7 +18,7 @@ export function AppHeader({ member }: { member: Member }) {
           <NavLink href="/calculator">Drop calculator</NavLink>
           <NavLink href="/sites">Sites</NavLink>
           <NavLink href="/consequence-levels">Consequence ladder</NavLink>
-          {member.role === 'admin' ? <NavLink href="/members">Members</NavLink> : null}
+          {can(member, 'members.manage') ? <NavLink href="/members">Members</NavLink> : null}
           <NavLink href="/profile">Profile</NavLink>
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">

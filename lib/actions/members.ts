@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { rolesFor } from '@/lib/auth/policy';
 import { addMember, changeRole, removeMember } from '@/db/memberships';
 import { renameOrganisation } from '@/db/organisations';
 import { hashPassword, requireRole, temporaryPassword } from '@/lib/auth';
@@ -18,7 +19,7 @@ function known(error: unknown): ActionState {
 }
 
 export async function inviteMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
+  const admin = await requireRole(rolesFor('members.manage'));
   const parsed = parseForm(inviteMemberSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   const password = temporaryPassword();
@@ -45,7 +46,7 @@ export async function inviteMemberAction(_prev: ActionState, form: FormData): Pr
 }
 
 export async function changeRoleAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
+  const admin = await requireRole(rolesFor('members.manage'));
   const parsed = parseForm(changeRoleSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   try {
@@ -58,7 +59,7 @@ export async function changeRoleAction(_prev: ActionState, form: FormData): Prom
 }
 
 export async function removeMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
+  const admin = await requireRole(rolesFor('members.manage'));
   const parsed = parseForm(removeMemberSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   try {
@@ -71,7 +72,7 @@ export async function removeMemberAction(_prev: ActionState, form: FormData): Pr
 }
 
 export async function organisationSettingsAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
+  const admin = await requireRole(rolesFor('members.manage'));
   const parsed = parseForm(organisationSettingsSchema, form);
   if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
   await renameOrganisation(admin.organisationId, parsed.data.name, admin.userId);

@@ -2,13 +2,13 @@
 
 import { revalidatePath } from 'next/cache';
 import { redirect } from 'next/navigation';
+import { rolesFor } from '@/lib/auth/policy';
 import { replaceLadder } from '@/db/consequence-levels';
 import { createItem, deleteItem, updateItem } from '@/db/items';
 import { createLevel, deleteLevel, updateLevel } from '@/db/levels';
 import { createSite, deleteSite, updateSite } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
 import { isUuid } from '@/lib/domain';
-import { EDITORS } from '@/lib/register/api';
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { formToObject, unflatten, unsafeInputFailure, UnsafeInputError } from '@/lib/validation/input';
@@ -50,7 +50,7 @@ function read(form: FormData): FormInput {
 }
 
 export const saveSiteAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const { values, units, id, refused } = read(form);
   if (refused) return refused;
   const parsed = siteSchema(units).safeParse(values);
@@ -72,7 +72,7 @@ export const saveSiteAction = outageSafe(async (_prev: ActionState, form: FormDa
 });
 
 export const deleteSiteAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const { id, refused } = read(form);
   if (refused) return refused;
   if (!isUuid(id)) return { message: 'That site no longer exists: it may have been deleted by someone else.' };
@@ -86,7 +86,7 @@ export const deleteSiteAction = outageSafe(async (_prev: ActionState, form: Form
 });
 
 export const saveLevelAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const { values, units, id, siteId, refused } = read(form);
   if (refused) return refused;
   const parsed = levelSchema(units).safeParse(values);
@@ -108,7 +108,7 @@ export const saveLevelAction = outageSafe(async (_prev: ActionState, form: FormD
 });
 
 export const deleteLevelAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const { id, siteId, refused } = read(form);
   if (refused) return refused;
   if (!isUuid(id)) return { message: 'That level no longer exists: it may have been deleted by someone else.' };
@@ -122,7 +122,7 @@ export const deleteLevelAction = outageSafe(async (_prev: ActionState, form: For
 });
 
 export const saveItemAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const { values, units, id, siteId, refused } = read(form);
   if (refused) return refused;
   const parsed = itemSchema(units).safeParse(values);
@@ -145,7 +145,7 @@ export const saveItemAction = outageSafe(async (_prev: ActionState, form: FormDa
 });
 
 export const deleteItemAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const { id, siteId, refused } = read(form);
   if (refused) return refused;
   if (!isUuid(id)) return { message: 'That item no longer exists: it may have been deleted by someone else.' };
@@ -159,7 +159,7 @@ export const deleteItemAction = outageSafe(async (_prev: ActionState, form: Form
 });
 
 export const saveLadderAction = outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-  const member = await requireRole(['admin']);
+  const member = await requireRole(rolesFor('ladder.edit'));
   const { values, refused } = read(form);
   if (refused) return refused;
   const parsed = ladderSchema.safeParse({ levels: values.levels ?? [] });

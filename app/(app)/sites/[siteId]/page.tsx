@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { can } from '@/lib/auth/policy';
 import { SITE_KIND_LABELS, SURFACE_LABELS } from '@/lib/domain';
 import { ConfirmForm } from '@/components/forms/confirm-form';
 import { LevelForm } from '@/components/sites/level-form';
@@ -33,7 +34,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
     listLadder(member.organisationId),
   ]);
   const units = member.unitSystem;
-  const canEdit = member.role === 'admin' || member.role === 'engineer';
+  const canEdit = can(member, 'register.edit');
   const levelEntries = levels.map((l) => ({ ...l, values: levelValues(l, site, units) }));
 
   return (
