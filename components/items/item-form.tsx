@@ -34,7 +34,7 @@ export function ItemForm({
   units: UnitSystem;
   levels: LevelChoice[];
 }) {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<ItemValues>(itemSchema(units) as never, saveItemAction, initial);
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(itemSchema(units), saveItemAction, initial);
   const shape = useWatch({ control: form.control, name: 'shape' }) as ShapeChoice;
   const levelId = useWatch({ control: form.control, name: 'level_id' });
   const direct = shape === 'direct';

@@ -56,7 +56,7 @@ const smallButton =
  */
 export function LadderEditor({ ladder, units }: { ladder: ConsequenceLevel[]; units: UnitSystem }) {
   const initial = useMemo<LadderValues>(() => ({ levels: ladderInOrder(ladder).map(toRow) }), [ladder]);
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<LadderValues>(ladderSchema as never, saveLadderAction, initial);
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(ladderSchema, saveLadderAction, initial);
   const { control, register, setValue, getValues, trigger } = form;
   const { fields, append, remove, swap, replace } = useFieldArray({ control, name: 'levels' });
   const values = useWatch({ control, name: 'levels' });
