@@ -4,6 +4,7 @@ import type { LadderInput } from '@/lib/validation/consequence-level';
 import { appendAudit } from './audit';
 import { getDb } from './knex';
 import { lockItems, lockOrganisation } from './locks';
+import type { Classifier, LadderBound } from './results';
 import type { Conn } from './types';
 
 const COLUMNS = ['id', 'rank', 'name', 'lower_bound_j', 'colour', 'guidance', 'source'] as const;
@@ -17,16 +18,20 @@ export async function insertDefaultLadder(trx: Conn, organisationId: string): Pr
   await trx('consequence_levels').insert(DEFAULT_LADDER.map((l) => ({ ...l, organisation_id: organisationId })));
 }
 
-/** Points every item of the organisation at the level its stored energy falls in. */
-export async function reclassifyItems(trx: Conn, organisationId: string): Promise<number> {
-  return trx.raw(
-    `UPDATE items AS i SET consequence_level_id = (
-       SELECT c.id FROM consequence_levels c
-        WHERE c.organisation_id = i.organisation_id AND c.lower_bound_j <= i.effective_energy_j
-        ORDER BY c.lower_bound_j DESC LIMIT 1)
-     WHERE i.organisation_id = ?`,
-    [organisationId],
-  ).then((r: { rowCount: number }) => r.rowCount);
+/** Points every item of the organisation at the level its stored energy falls in, in one statement per chunk. */
+async function reclassifyItems(trx: Conn, organisationId: string, ladder: readonly LadderBound[], classify: Classifier): Promise<number> {
+  const rows: { id: string; effective_energy_j: number | null }[] = await trx('items')
+    .where({ organisation_id: organisationId })
+    .select('id', 'effective_energy_j');
+  const CHUNK = 5000;
+  for (let start = 0; start < rows.length; start += CHUNK) {
+    const slice = rows.slice(start, start + CHUNK);
+    await trx.raw(
+      `UPDATE items AS i SET consequence_level_id = v.level FROM unnest(?::uuid[], ?::uuid[]) AS v(id, level) WHERE i.id = v.id`,
+      [slice.map((r) => r.id), slice.map((r) => classify(r.effective_energy_j, ladder))] as unknown as string[][],
+    );
+  }
+  return rows.length;
 }
 
 /**
@@ -37,6 +42,7 @@ export async function replaceLadder(
   organisationId: string,
   actorUserId: string,
   input: LadderInput,
+  classify: Classifier,
   conn: Conn = getDb(),
 ): Promise<{ ladder: ConsequenceLevel[]; reclassified: number }> {
   return conn.transaction(async (trx) => {
@@ -49,8 +55,8 @@ export async function replaceLadder(
     await trx('consequence_levels').insert(
       input.levels.map((l, i) => ({ ...l, rank: i + 1, organisation_id: organisationId })),
     );
-    const reclassified = await reclassifyItems(trx, organisationId);
     const ladder = await listLadder(organisationId, trx);
+    const reclassified = await reclassifyItems(trx, organisationId, ladder, classify);
     const strip = (levels: ConsequenceLevel[]) => levels.map(({ name, lower_bound_j, colour }) => ({ name, lower_bound_j, colour }));
     await appendAudit(trx, {
       organisationId,

@@ -2,12 +2,12 @@
 
 import { revalidatePath } from 'next/cache';
 import { redirect } from 'next/navigation';
-import { replaceLadder } from '@/db/consequence-levels';
-import { createItem, deleteItem, updateItem } from '@/db/items';
-import { createLevel, deleteLevel, updateLevel } from '@/db/levels';
-import { createSite, deleteSite, updateSite } from '@/db/sites';
+import { deleteItem } from '@/db/items';
+import { createLevel, deleteLevel } from '@/db/levels';
+import { createSite, deleteSite } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
 import { EDITORS } from '@/lib/register/api';
+import { createItem, replaceLadder, updateItem, updateLevel, updateSite } from '@/lib/register/commands';
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { isUuid } from '@/lib/validation/ids';

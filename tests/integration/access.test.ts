@@ -22,7 +22,7 @@ import { GET as getLevels, POST as postLevel } from '@/app/api/v1/sites/[id]/lev
 import { GET as getItems, POST as postItem } from '@/app/api/v1/sites/[id]/items/route';
 import { POST as importItemsRoute } from '@/app/api/v1/sites/[id]/items/import/route';
 import { GET as getRegisterCsv } from '@/app/api/v1/sites/[id]/items.csv/route';
-import { createItem } from '@/db/items';
+
 import { createLevel } from '@/db/levels';
 import { createSite } from '@/db/sites';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
@@ -50,6 +50,7 @@ import { startSession } from '@/lib/auth';
 import { SESSION_COOKIE } from '@/lib/auth/config';
 import { requestContext } from './harness/context';
 import { createOrg, ctx, jsonRequest, PASSWORD, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
+import { createItem } from '@/lib/register/commands';
 
 type Subject = 'anonymous' | 'admin' | 'engineer' | 'reviewer' | 'viewer' | 'foreign admin';
 const SUBJECTS: Subject[] = ['anonymous', 'admin', 'engineer', 'reviewer', 'viewer', 'foreign admin'];
