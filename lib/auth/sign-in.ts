@@ -6,6 +6,7 @@ import { findUserByEmail } from '@/db/users';
 import { UnavailableError } from '@/lib/errors';
 import { clientAddress } from '@/lib/http/request-meta';
 import { requestLog } from '@/lib/log';
+import { busyError, hashPoolFull } from './hash-pool';
 import { burnPasswordCheck, verifyPassword } from './password';
 import { limitWindows, refusalFor, type LimitReason } from './rate-limit';
 
@@ -34,6 +35,11 @@ async function logRefusal(reason: LimitReason | 'wrong credentials' | 'busy', em
 export async function authenticate(email: string, password: string): Promise<SignInOutcome> {
   const started = Date.now();
   const address = await clientAddress();
+  // A full pool refuses before any database work, so a flood's extra requests cost next to nothing.
+  if (hashPoolFull()) {
+    await logRefusal('busy', email, address);
+    throw busyError();
+  }
   const reserved = await reserveSignInAttempt({ email, address, ...limitWindows(new Date()) }, (history) => refusalFor(history, new Date()));
   if (!reserved.ok) {
     await logRefusal(reserved.refusal.reason, email, address);
