@@ -46,7 +46,10 @@ import {
   removeMemberAction,
 } from '@/lib/actions/members';
 import { changePasswordAction, setUnitSystemAction, updateProfileAction } from '@/lib/actions/profile';
-import { startSession } from '@/lib/auth';
+import { sealData } from 'iron-session';
+import { endSession, startSession } from '@/lib/auth';
+import { SESSION_COOKIE } from '@/lib/auth/config';
+import { requestContext } from './harness/context';
 import { createOrg, ctx, jsonRequest, PASSWORD, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
 
 type Subject = 'anonymous' | 'admin' | 'engineer' | 'reviewer' | 'viewer' | 'foreign admin';
@@ -56,6 +59,25 @@ let home: OrgFixture;
 let foreign: OrgFixture;
 /** The home organisation's register: a site, a level with one item, and an empty level that may be deleted. */
 let reg: { siteId: string; levelId: string; emptyLevelId: string; itemId: string };
+
+/**
+ * Cookies that must count as no session at all, so every cell expects the anonymous outcome: the admin's cookie copied
+ * before they signed out, and one sealed with a secret that is not the server's.
+ */
+type SignedOutLike = 'revoked admin cookie' | 'forged cookie';
+const SIGNED_OUT_LIKE: SignedOutLike[] = ['revoked admin cookie', 'forged cookie'];
+
+async function actWithCookie(subject: SignedOutLike) {
+  signOutLocally();
+  if (subject === 'forged cookie') {
+    requestContext.cookies.set(SESSION_COOKIE, await sealData({ sid: 'F'.repeat(43) }, { password: 'not-the-server-secret-'.repeat(2) }));
+    return;
+  }
+  await startSession(home.users.admin.id, home.id);
+  const copy = requestContext.cookies.snapshot();
+  await endSession();
+  requestContext.cookies.restore(copy);
+}
 
 async function actAs(subject: Subject) {
   signOutLocally();
@@ -381,6 +403,12 @@ describe('every route, page and action against every role', () => {
       it(`${c.name} as ${subject} → ${c.expected[subject]}`, async () => {
         await actAs(subject);
         expect(await c.run()).toBe(c.expected[subject]);
+      });
+    }
+    for (const subject of SIGNED_OUT_LIKE) {
+      it(`${c.name} with a ${subject} → ${c.expected.anonymous}`, async () => {
+        await actWithCookie(subject);
+        expect(await c.run()).toBe(c.expected.anonymous);
       });
     }
   }
