@@ -6,7 +6,8 @@ import { findUserByEmail } from '@/db/users';
 import { UnavailableError } from '@/lib/errors';
 import { clientAddress } from '@/lib/http/request-meta';
 import { requestLog } from '@/lib/log';
-import { busyError, hashPoolFull } from './hash-pool';
+import { Gate } from './gate';
+import { busyError, HASH_QUEUE_LIMIT, hashPoolFull } from './hash-pool';
 import { burnPasswordCheck, verifyPassword } from './password';
 import { limitWindows, refusalFor, type LimitReason } from './rate-limit';
 
@@ -18,6 +19,12 @@ export const WRONG_CREDENTIALS = 'That e-mail and password do not match an accou
  */
 export const WRONG_ANSWER_FLOOR_MS = 1000;
 
+/**
+ * Limit checks in flight at once, per process: each holds a pooled database connection (and may wait on another's
+ * lock), so a flood of sign-ins uses at most two of the pool's connections and never starves other requests.
+ */
+const checking = new Gate(2);
+
 export type SignInOutcome =
   | { ok: true; member: Member }
   | { ok: false; status: 401 | 429; message: string; retryAfterS?: number };
@@ -27,20 +34,40 @@ async function logRefusal(reason: LimitReason | 'wrong credentials' | 'busy', em
   (await requestLog()).warn({ event: 'sign_in_refused', reason, email: email.toLowerCase().slice(0, 254), address }, 'sign-in refused');
 }
 
+/** Sign-ins between admission and their answer (waiting at the gate, checking, hashing), per process. */
+let admitted = 0;
+
 /**
  * Checks an e-mail and password against the limits (lib/auth/rate-limit.ts) and then the stored hash, on the
  * hashing pool. The address is the one the server took from the socket (TRUST_PROXY_HOPS), never the client's claim.
- * Throws UnavailableError (503) when the hashing pool is full; that attempt then counts for nothing.
+ * Throws UnavailableError (503) when HASH_QUEUE_LIMIT sign-ins are in hand or the pool is full; that attempt then
+ * counts for nothing. The refusal comes before any database work, so a flood's extra requests cost next to nothing.
  */
 export async function authenticate(email: string, password: string): Promise<SignInOutcome> {
   const started = Date.now();
   const address = await clientAddress();
-  // A full pool refuses before any database work, so a flood's extra requests cost next to nothing.
-  if (hashPoolFull()) {
+  if (admitted >= HASH_QUEUE_LIMIT || hashPoolFull()) {
     await logRefusal('busy', email, address);
     throw busyError();
   }
-  const reserved = await reserveSignInAttempt({ email, address, ...limitWindows(new Date()) }, (history) => refusalFor(history, new Date()));
+  admitted += 1;
+  let outcome: SignInOutcome;
+  try {
+    outcome = await check(email, password, address);
+  } finally {
+    admitted -= 1;
+  }
+  if (!outcome.ok && outcome.status === 401) {
+    // Held outside the admission: waiting costs a timer, not a place in the queue.
+    await sleep(Math.max(0, started + WRONG_ANSWER_FLOOR_MS - Date.now()));
+  }
+  return outcome;
+}
+
+async function check(email: string, password: string, address: string): Promise<SignInOutcome> {
+  const reserved = await checking.run(() =>
+    reserveSignInAttempt({ email, address, ...limitWindows(new Date()) }, (history) => refusalFor(history, new Date())),
+  );
   if (!reserved.ok) {
     await logRefusal(reserved.refusal.reason, email, address);
     return { ok: false, status: 429, message: reserved.refusal.message, retryAfterS: reserved.refusal.retryAfterS };
@@ -57,7 +84,6 @@ export async function authenticate(email: string, password: string): Promise<Sig
   }
   if (!member) {
     await logRefusal('wrong credentials', email, address);
-    await sleep(Math.max(0, started + WRONG_ANSWER_FLOOR_MS - Date.now()));
     return { ok: false, status: 401, message: WRONG_CREDENTIALS };
   }
   await markSignInSucceeded(reserved.id);
