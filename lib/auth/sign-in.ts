@@ -1,6 +1,6 @@
 import { setTimeout as sleep } from 'node:timers/promises';
 import { firstMembership } from '@/db/memberships';
-import { cancelSignInAttempt, markSignInSucceeded, reserveSignInAttempt } from '@/db/sign-in-attempts';
+import { cancelSignInAttempt, markSignInSucceeded, pruneSignInAttempts, reserveSignInAttempt } from '@/db/sign-in-attempts';
 import type { Member } from '@/db/types';
 import { findUserByEmail } from '@/db/users';
 import { UnavailableError } from '@/lib/errors';
@@ -9,7 +9,7 @@ import { requestLog } from '@/lib/log';
 import { Gate } from './gate';
 import { busyError, HASH_QUEUE_LIMIT, hashPoolFull } from './hash-pool';
 import { burnPasswordCheck, verifyPassword } from './password';
-import { limitWindows, refusalFor, type LimitReason } from './rate-limit';
+import { limitWindows, pruneBefore, refusalFor, type LimitReason } from './rate-limit';
 
 export const WRONG_CREDENTIALS = 'That e-mail and password do not match an account.';
 
@@ -34,6 +34,17 @@ async function logRefusal(reason: LimitReason | 'wrong credentials' | 'busy', em
   (await requestLog()).warn({ event: 'sign_in_refused', reason, email: email.toLowerCase().slice(0, 254), address }, 'sign-in refused');
 }
 
+/** Old attempts are pruned by whichever sign-in comes first after this long, per process, not on a timer. */
+const PRUNE_EVERY_MS = 10 * 60_000;
+let lastPrune = 0;
+
+function pruneNowAndThen(): void {
+  if (Date.now() - lastPrune < PRUNE_EVERY_MS) return;
+  lastPrune = Date.now();
+  // Housekeeping must never fail or slow a sign-in: it runs beside it, and a failure waits for the next turn.
+  pruneSignInAttempts(pruneBefore(new Date())).catch(async (error) => (await requestLog()).warn({ err: error }, 'pruning sign-in attempts failed'));
+}
+
 /** Sign-ins between admission and their answer (waiting at the gate, checking, hashing), per process. */
 let admitted = 0;
 
@@ -51,6 +62,7 @@ export async function authenticate(email: string, password: string): Promise<Sig
     throw busyError();
   }
   admitted += 1;
+  pruneNowAndThen();
   let outcome: SignInOutcome;
   try {
     outcome = await check(email, password, address);
