@@ -4,7 +4,7 @@ import { revalidatePath } from 'next/cache';
 import { addMember, changeRole, removeMember } from '@/db/memberships';
 import { renameOrganisation } from '@/db/organisations';
 import { hashPassword, requireRole, temporaryPassword } from '@/lib/auth';
-import { ConflictError, NotFoundError } from '@/lib/errors';
+import { ConflictError, NotFoundError, UnavailableError } from '@/lib/errors';
 import { parseForm } from '@/lib/validation/input';
 import { toFieldErrors } from '@/lib/validation/issues';
 import { changeRoleSchema, inviteMemberSchema, removeMemberSchema } from '@/lib/validation/member';
@@ -14,6 +14,8 @@ import type { ActionState } from './state';
 function known(error: unknown): ActionState {
   if (error instanceof ConflictError) return { errors: { [error.field]: error.message }, message: error.message };
   if (error instanceof NotFoundError) return { message: 'That member is no longer in the organisation.' };
+  // The password hashing pool is full (lib/auth/hash-pool.ts): the message says when to try again.
+  if (error instanceof UnavailableError) return { message: error.message };
   throw error;
 }
 
