@@ -204,7 +204,23 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
   const extras: { energy_audit?: EnergyAudit; samples?: DropSamples } = {};
   if (opts.energyAudit) extras.energy_audit = energyAudit(c, runs);
   if (sampleCount > 0) extras.samples = sampleRuns(runs, t, state, sampleCount);
-  return { ...result, ...extras };
+  const full = { ...result, ...extras };
+  requireFiniteResult(full, 'result');
+  return full;
+}
+
+/**
+ * Inside the input limits every number is finite; this guard makes sure no NaN or infinity
+ * can ever reach a caller (JSON would print it as null, silently) even if that reasoning fails.
+ */
+function requireFiniteResult(value: unknown, path: string): void {
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new PhysicsSolveError(`${path} came out as ${value}; no result is given rather than a wrong one (please report the case)`);
+  } else if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) requireFiniteResult(value[i], `${path}.${i}`);
+  } else if (value !== null && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) requireFiniteResult(v, `${path}.${k}`);
+  }
 }
 
 function closedFormFor(c: ResolvedCase) {
