@@ -51,6 +51,7 @@ CASES = [
     ("near-neutral object thrown up, linear and quadratic drag", {"object": {**NEAR_NEUTRAL, "linear_coeff_kg_s": 0.01}, "drag_model": "linear_quadratic", "medium": SEA, "release": {"height_m": 10, "velocity_m_s": [0, 5]}}),
     ("light sheet thrown down into a head wind", {"object": {"mass_kg": 12.9e-6, "cd": 0.6, "area_m2": 3.5}, "drag_model": "quadratic", "medium": AIR, "release": {"height_m": 6.4e-3, "velocity_m_s": [0, -39.6]}, "wind_m_s": -27.7}),
     ("light sheet thrown sideways into a head wind", {"object": {"mass_kg": 12.9e-6, "cd": 0.6, "area_m2": 3.5}, "drag_model": "quadratic", "medium": AIR, "release": {"height_m": 6.4e-3, "velocity_m_s": [-39.6, 0]}, "wind_m_s": -27.7}),
+    ("light sheet, low drag coefficient, thrown sideways", {"object": {"mass_kg": 12.9e-6, "cd": 0.1, "area_m2": 3.5}, "drag_model": "quadratic", "medium": AIR, "release": {"height_m": 6.4e-3, "velocity_m_s": [-39.6, 0]}, "wind_m_s": -27.7}),
     ("2 kg object, 50 m, wind", {"object": {"mass_kg": 2, "cd": 1.0, "area_m2": 0.01}, "drag_model": "quadratic", "medium": AIR, "release": {"height_m": 50, "velocity_m_s": [1, 0]}, "wind_m_s": 10}),
     ("5 kg tool thrown up into wind", {"object": {"mass_kg": 5, "cd": 0.9, "area_m2": 0.02, "linear_coeff_kg_s": 0.05}, "drag_model": "linear_quadratic", "medium": AIR, "release": {"height_m": 30, "velocity_m_s": [2, 5]}, "wind_m_s": -8}),
     ("30 kg box, air over seawater", {
