@@ -1,7 +1,7 @@
 import { resolveDropCase, type DropCase, type ResolvedCase, type ResolvedLayer } from './case';
 import { reynoldsRegime, regimeMismatch, relativeDeviation, verify, type ReynoldsRegime, type Verification } from './classification';
 import { closedFormFall } from './closed-forms';
-import { MAX_SAMPLES, MODEL_VERSION } from './constants';
+import { MAX_SAMPLES, MODEL_VERSION, VERIFICATION_THRESHOLD } from './constants';
 import { PhysicsInputError, PhysicsSolveError, requireInteger } from './errors';
 import {
   integrate,
@@ -32,11 +32,30 @@ export interface LayerReport {
   readonly top_m: number;
   readonly bottom_m: number;
   readonly terminal_speed_m_s: number | null;
-  /** Null for layers below the one the object floats in. */
+  /** Arrival at the top of the layer (its upper surface); null below the layer the object floats in. */
   readonly entry_time_s: number | null;
   readonly entry_speed_m_s: number | null;
+  readonly entry_velocity_m_s: [number, number] | null;
+  /** ½·m·v² on arrival. */
+  readonly entry_kinetic_energy_j: number | null;
+  /** ½·(m + m_a)·v² on arrival, with the added mass of this layer's medium (zero in a gas). */
+  readonly entry_effective_energy_j: number | null;
   /** Null when the object does not pass through the layer (it floats in it or above it). */
   readonly exit_time_s: number | null;
+  /** Set where the analytic terminal tail finished the layer. */
+  readonly analytic_tail: TailReport | null;
+}
+
+/** Arrival at one surface: a water surface or the bottom. */
+export interface SurfaceArrival {
+  /** The layer whose top (water entry) or bottom (seabed) this is. */
+  readonly layer_index: number;
+  readonly time_s: number;
+  readonly speed_m_s: number;
+  readonly velocity_m_s: [number, number];
+  readonly kinetic_energy_j: number;
+  /** With the added mass of the liquid: what a struck body takes, per DNV-RP-F107's E = ½(m + m_a)v². */
+  readonly effective_energy_j: number;
 }
 
 /** Where the analytic terminal tail took over a layer, and a bound on the error it adds. */
@@ -90,6 +109,13 @@ export interface DropResult {
   readonly verification: Verification | null;
   readonly vacuum: { fall_time_s: number; impact_speed_m_s: number; impact_energy_j: number };
   readonly layers: LayerReport[];
+  /**
+   * First passage from a gas into a liquid: what a boat, a lower landing or a person in the
+   * water takes. Null when the fall starts in the liquid or never meets one.
+   */
+  readonly water_entry: SurfaceArrival | null;
+  /** Arrival at the bottom of a liquid bottom layer: what subsea equipment takes. Null if it floats or the bottom is dry. */
+  readonly seabed: SurfaceArrival | null;
   readonly energy_audit?: EnergyAudit;
   readonly warnings: string[];
   readonly notice: string;
@@ -177,6 +203,7 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
 
   const vac = closedFormFall({ height_m: c.height_m, vx0, vy0, gravity: c.gravity_m_s2, linear_per_s: 0, quadratic_per_m: 0, flow_m_s: 0 })!;
 
+  const layers = layerReports(c, runs);
   const result: DropResult = {
     model_version: MODEL_VERSION,
     sinks: floatsIn === null,
@@ -197,8 +224,10 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
     closed_form_rel_deviation: deviation,
     verification,
     vacuum: { fall_time_s: vac.fall_time_s, impact_speed_m_s: vac.impact_speed_m_s, impact_energy_j: 0.5 * m * vac.impact_speed_m_s ** 2 },
-    layers: layerReports(c, runs),
-    warnings: warningsFor(c, runs, floatsIn, regime.regime, deviation),
+    layers,
+    water_entry: waterEntry(c, layers),
+    seabed: floatsIn === null && endLayer.medium.phase === 'liquid' ? arrival(endLayer, m, t, vx, vy) : null,
+    warnings: warningsFor(c, runs, floatsIn, regime.regime, deviation, t),
     notice: NOTICE,
   };
   const extras: { energy_audit?: EnergyAudit; samples?: DropSamples } = {};
@@ -448,12 +477,26 @@ function terminalTail(layer: ResolvedLayer, s: number[], dtGiven?: number): { dt
   };
 }
 
+function arrival(layer: ResolvedLayer, m: number, t: number, vx: number, vy: number): SurfaceArrival {
+  const v2 = vx * vx + vy * vy;
+  return {
+    layer_index: layer.index,
+    time_s: t,
+    speed_m_s: Math.sqrt(v2),
+    velocity_m_s: [vx, vy],
+    kinetic_energy_j: 0.5 * m * v2,
+    effective_energy_j: 0.5 * (m + layer.added_mass_kg) * v2,
+  };
+}
+
 function layerReports(c: ResolvedCase, runs: LayerRun[]): LayerReport[] {
+  const m = c.object.mass_kg;
   return c.layers.map((layer, i) => {
     const run = runs[i];
     // The layer after the last one run is where the object arrived and floats.
-    const arrival = !run && i === runs.length ? (runs.length > 0 ? { t: runs[i - 1].t1, s: runs[i - 1].s1 } : { t: 0, s: [0, 0, ...c.release_velocity] }) : null;
-    const entry = run ? { t: run.t0, s: run.s0 } : arrival;
+    const floatsHere = !run && i === runs.length ? (runs.length > 0 ? { t: runs[i - 1].t1, s: runs[i - 1].s1 } : { t: 0, s: [0, 0, ...c.release_velocity] }) : null;
+    const entry = run ? { t: run.t0, s: run.s0 } : floatsHere;
+    const at = entry ? arrival(layer, m, entry.t, entry.s[2], entry.s[3]) : null;
     return {
       index: layer.index,
       medium: layer.medium.label,
@@ -461,11 +504,31 @@ function layerReports(c: ResolvedCase, runs: LayerRun[]): LayerReport[] {
       top_m: layer.top_m,
       bottom_m: layer.bottom_m,
       terminal_speed_m_s: Number.isFinite(layer.terminal_speed_m_s) && layer.net_weight_n > 0 ? layer.terminal_speed_m_s : null,
-      entry_time_s: entry ? entry.t : null,
-      entry_speed_m_s: entry ? Math.hypot(entry.s[2], entry.s[3]) : null,
+      entry_time_s: at ? at.time_s : null,
+      entry_speed_m_s: at ? at.speed_m_s : null,
+      entry_velocity_m_s: at ? at.velocity_m_s : null,
+      entry_kinetic_energy_j: at ? at.kinetic_energy_j : null,
+      entry_effective_energy_j: at ? at.effective_energy_j : null,
       exit_time_s: run ? run.t1 : null,
+      analytic_tail: run ? run.tail : null,
     };
   });
+}
+
+function waterEntry(c: ResolvedCase, layers: LayerReport[]): SurfaceArrival | null {
+  for (let i = 1; i < layers.length; i++) {
+    const l = layers[i];
+    if (l.phase !== 'liquid' || layers[i - 1].phase !== 'gas' || l.entry_time_s === null) continue;
+    return {
+      layer_index: l.index,
+      time_s: l.entry_time_s,
+      speed_m_s: l.entry_speed_m_s!,
+      velocity_m_s: l.entry_velocity_m_s!,
+      kinetic_energy_j: l.entry_kinetic_energy_j!,
+      effective_energy_j: l.entry_effective_energy_j!,
+    };
+  }
+  return null;
 }
 
 function energyAudit(c: ResolvedCase, runs: LayerRun[]): EnergyAudit {
@@ -543,6 +606,7 @@ function warningsFor(
   floatsIn: ResolvedLayer | null,
   regime: ReynoldsRegime,
   deviation: number | null,
+  fallTime: number,
 ): string[] {
   const w: string[] = [];
   const o = c.object;
@@ -581,8 +645,12 @@ function warningsFor(
   }
   const mismatch = regimeMismatch(c.drag_model, regime);
   if (mismatch) w.push(mismatch);
-  if (deviation !== null && deviation > 1e-6) {
-    w.push(`The integration deviates from the closed-form solution by ${deviation.toExponential(2)} (limit 1e-6): do not rely on this result.`);
+  const tailError = runs.reduce((sum, r) => sum + (r.tail ? r.tail.time_error_bound_s : 0), 0);
+  if (tailError > VERIFICATION_THRESHOLD * fallTime) {
+    w.push(`The analytic terminal tail may add up to ${tailError.toExponential(2)} s to the fall time (more than ${VERIFICATION_THRESHOLD.toExponential(0)} of it): tighten the integration tolerance.`);
+  }
+  if (deviation !== null && deviation > VERIFICATION_THRESHOLD) {
+    w.push(`The integration deviates from the closed-form solution by ${deviation.toExponential(2)} (limit ${VERIFICATION_THRESHOLD.toExponential(0)}): do not rely on this result.`);
   }
   return w;
 }

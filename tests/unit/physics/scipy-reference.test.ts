@@ -46,6 +46,55 @@ describe('falls against SciPy (independent reference, rtol 1e-12)', () => {
       const layer = r.layers[i];
       expect(rel(layer.entry_time_s!, entry.time_s, ref.fall_time_s)).toBeLessThan(1e-8);
       expect(rel(layer.entry_speed_m_s!, Math.hypot(...entry.velocity_m_s), speed)).toBeLessThan(1e-8);
+      expect(rel(layer.entry_velocity_m_s![0], entry.velocity_m_s[0], speed)).toBeLessThan(1e-8);
+      expect(rel(layer.entry_velocity_m_s![1], entry.velocity_m_s[1], speed)).toBeLessThan(1e-8);
     });
+  });
+});
+
+describe('energies at each surface, over the sea', () => {
+  const box = fixture.cases.find((c) => c.name === '30 kg box, air over seawater')!;
+  const r = simulateDrop(box.case);
+  const o = box.case.object;
+  // DNV-RP-F107's impact energy E = ½·(m + m_a)·v² with m_a = ρ·C_a·V; ½·m·v² without added mass.
+  const addedMass = 1025 * o.added_mass_coeff! * o.volume_m3!;
+  const entry = box.reference.layer_entries[1];
+  const v2 = entry.velocity_m_s[0] ** 2 + entry.velocity_m_s[1] ** 2;
+
+  it('water entry: time, velocity and both energies at the sea surface', () => {
+    const w = r.water_entry!;
+    expect(w.layer_index).toBe(1);
+    expect(rel(w.time_s, entry.time_s, 0)).toBeLessThan(1e-8);
+    expect(rel(w.kinetic_energy_j, 0.5 * o.mass_kg * v2, 0)).toBeLessThan(1e-8);
+    expect(rel(w.effective_energy_j, 0.5 * (o.mass_kg + addedMass) * v2, 0)).toBeLessThan(1e-8);
+    expect(r.layers[1].entry_effective_energy_j).toBe(w.effective_energy_j);
+    // In the air above, the entry energy has no added mass.
+    expect(r.layers[0].entry_effective_energy_j).toBe(r.layers[0].entry_kinetic_energy_j);
+  });
+
+  it('seabed: the arrival at the bottom, with the added mass of seawater', () => {
+    const b = r.seabed!;
+    const vb = box.reference.impact_velocity_m_s;
+    const vb2 = vb[0] ** 2 + vb[1] ** 2;
+    expect(b.layer_index).toBe(1);
+    expect(b.time_s).toBe(r.fall_time_s);
+    expect(rel(b.effective_energy_j, 0.5 * (o.mass_kg + addedMass) * vb2, 0)).toBeLessThan(1e-8);
+    expect(rel(b.effective_energy_j, r.effective_impact_energy_j, 0)).toBeLessThan(1e-14);
+    // Far more energy reaches the sea surface than the seabed, 60 m below at terminal speed.
+    expect(r.water_entry!.kinetic_energy_j).toBeGreaterThan(100 * b.kinetic_energy_j);
+  });
+
+  it('no water entry or seabed for a fall in air, and no seabed when the object floats', () => {
+    expect(simulateDrop({ object: { mass_kg: 2, cd: 1, area_m2: 0.01 }, drag_model: 'quadratic', medium: { preset: 'isa' }, release: { height_m: 10 } })).toMatchObject({ water_entry: null, seabed: null });
+    const floating = simulateDrop({
+      object: { mass_kg: 1, cd: 1, area_m2: 0.02, volume_m3: 0.003 },
+      drag_model: 'quadratic',
+      layers: [
+        { medium: { preset: 'isa' }, thickness_m: 10 },
+        { medium: { preset: 'seawater' }, thickness_m: 50 },
+      ],
+    });
+    expect(floating.seabed).toBeNull();
+    expect(floating.water_entry!.speed_m_s).toBe(floating.impact_speed_m_s);
   });
 });
