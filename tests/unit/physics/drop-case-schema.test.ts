@@ -46,8 +46,9 @@ describe('drop-case schema', () => {
 
 describe('assess command line', () => {
   const dir = mkdtempSync(join(tmpdir(), 'plumbline-assess-'));
+  // The way `npm run -s assess` starts it: the launcher rebuilds the bundle if it is stale.
   const run = (args: string[], input?: string) =>
-    spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'scripts/assess.ts', ...args], { input, encoding: 'utf8', cwd: process.cwd(), timeout: 60_000 });
+    spawnSync(process.execPath, ['scripts/assess.mjs', ...args], { input, encoding: 'utf8', cwd: process.cwd(), timeout: 120_000, maxBuffer: 64 * 1024 * 1024 });
 
   it('prints the result JSON for a file', () => {
     const file = join(dir, 'case.json');
@@ -59,16 +60,41 @@ describe('assess command line', () => {
     expect(out.verification.passed).toBe(true);
   });
 
-  it('reads standard input and answers an array with an array', () => {
+  it('reads standard input and answers a list with a list, one case per line', () => {
     const r = run(['-'], JSON.stringify([good, { ...good, drag_model: 'none' }]));
     expect(r.status).toBe(0);
-    expect(JSON.parse(r.stdout)).toHaveLength(2);
+    const out = JSON.parse(r.stdout);
+    expect(out).toHaveLength(2);
+    // Vacuum 10 m: t = √(2h/g) = 1.42784 s (textbook); the drag case is slower.
+    expect(out[1].fall_time_s).toBeCloseTo(Math.sqrt(20 / 9.80665), 12);
+    expect(out[0].fall_time_s).toBeGreaterThan(out[1].fall_time_s);
+    expect(r.stdout.trim().split('\n')).toHaveLength(4);
   });
 
-  it('exits 2 and names the wrong field', () => {
-    const r = run(['-'], JSON.stringify([good, { ...good, object: { mass_kg: 0 } }]));
+  it('a bad case gets an error object in its place, the others their results, and exit 2', () => {
+    const r = run(['-'], JSON.stringify([good, { ...good, object: { mass_kg: 0 } }, { ...good, release: { height_m: 20 } }]));
     expect(r.status).toBe(2);
     expect(r.stderr).toContain('case 1: object.mass_kg');
+    const out = JSON.parse(r.stdout);
+    expect(out).toHaveLength(3);
+    expect(out[0].fall_time_s).toBeGreaterThan(0);
+    expect(out[1].error.kind).toBe('input');
+    expect(out[1].error.issues.map((i: { path: string }) => i.path)).toContain('object.mass_kg');
+    // In order: the 20 m case falls longer than the 10 m one.
+    expect(out[2].fall_time_s).toBeGreaterThan(out[0].fall_time_s);
+  });
+
+  it('a value beyond the model limits is bad input (exit 2), not a failed solve', () => {
+    const r = run(['-'], JSON.stringify({ ...good, object: { mass_kg: 1, linear_coeff_kg_s: 1e308 }, drag_model: 'linear' }));
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/object\.linear_coeff_kg_s: must be from 0 to 1e6 kg\/s/);
+    expect(JSON.parse(r.stdout).error.kind).toBe('input');
+  });
+
+  it('refuses more than 100,000 cases before solving any', () => {
+    const r = run(['-'], JSON.stringify(Array.from({ length: 100_001 }, () => ({}))));
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/at most 100000 cases/);
     expect(r.stdout).toBe('');
   });
 
