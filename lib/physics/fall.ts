@@ -242,13 +242,16 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
  * Inside the input limits every number is finite; this guard makes sure no NaN or infinity
  * can ever reach a caller (JSON would print it as null, silently) even if that reasoning fails.
  */
-function requireFiniteResult(value: unknown, path: string): void {
-  if (typeof value === 'number') {
-    if (!Number.isFinite(value)) throw new PhysicsSolveError(`${path} came out as ${value}; no result is given rather than a wrong one (please report the case)`);
-  } else if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) requireFiniteResult(value[i], `${path}.${i}`);
-  } else if (value !== null && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value)) requireFiniteResult(v, `${path}.${k}`);
+function requireFiniteResult(value: object, path: string): void {
+  // Paths are only built for the error: this runs on every result.
+  const values = value as Record<string, unknown>;
+  for (const key in values) {
+    const v = values[key];
+    if (typeof v === 'number') {
+      if (v - v !== 0) throw new PhysicsSolveError(`${path}.${key} came out as ${v}; no result is given rather than a wrong one (please report the case)`);
+    } else if (v !== null && typeof v === 'object') {
+      requireFiniteResult(v, `${path}.${key}`);
+    }
   }
 }
 
