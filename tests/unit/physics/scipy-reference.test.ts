@@ -98,3 +98,23 @@ describe('energies at each surface, over the sea', () => {
     expect(floating.water_entry!.speed_m_s).toBe(floating.impact_speed_m_s);
   });
 });
+
+describe('the analytic terminal tail', () => {
+  it('finishes the stiff cases from within √rtol of terminal velocity, with a bound far below the verification threshold', () => {
+    for (const name of ['1 um sphere in 20 m/s wind', 'near-neutral object in a current', '30 kg box, air over seawater']) {
+      const c = fixture.cases.find((x) => x.name === name)!;
+      const r = simulateDrop(c.case);
+      const tails = r.layers.map((l) => l.analytic_tail).filter((t) => t !== null);
+      expect(tails.length, name).toBeGreaterThan(0);
+      for (const t of tails) {
+        // θ = max(√1e-10, 1e4·1e-10) = 1e-5 at the default tolerance (DEVELOPERS.md, the terminal tail).
+        expect(t.deviation).toBeLessThanOrEqual(1e-5);
+        expect(t.time_error_bound_s).toBeLessThan(1e-6 * r.fall_time_s);
+        expect(t.from_time_s).toBeLessThan(r.fall_time_s);
+      }
+      // The bound holds against SciPy: the fall time is off by less than bound plus the integration tolerance.
+      const bound = tails.reduce((s, t) => s + t.time_error_bound_s, 0);
+      expect(Math.abs(r.fall_time_s - c.reference.fall_time_s)).toBeLessThan(bound + 1e-8 * c.reference.fall_time_s);
+    }
+  });
+});
