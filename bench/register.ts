@@ -4,7 +4,7 @@
  * their targets and asserts nothing.
  */
 import { createOrganisationWithAdmin } from '@/db/organisations';
-import { importItems, listRegister } from '@/db/items';
+import { listRegister } from '@/db/items';
 import { createLevel, listLevels } from '@/db/levels';
 import { closeDb } from '@/db/knex';
 import { createSite } from '@/db/sites';
@@ -12,6 +12,7 @@ import { hashPassword } from '@/lib/auth/password';
 import { parseItemsCsv } from '@/lib/register/csv';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';
+import { importItems } from '@/lib/register/commands';
 
 const LEVELS = [
   ['Roof', 48],

@@ -1,9 +1,10 @@
-import { classify, type ConsequenceLevel } from '@/lib/domain';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import type { ConsequenceLevel } from '@/lib/domain';
 import type { LadderInput } from '@/lib/validation/consequence-level';
 import { appendAudit } from './audit';
 import { getDb } from './knex';
 import { lockItems, lockOrganisation } from './locks';
+import type { Classifier, LadderBound } from './results';
 import type { Conn } from './types';
 
 const COLUMNS = ['id', 'rank', 'name', 'lower_bound_j', 'colour', 'guidance', 'source'] as const;
@@ -17,24 +18,20 @@ export async function insertDefaultLadder(trx: Conn, organisationId: string): Pr
   await trx('consequence_levels').insert(DEFAULT_LADDER.map((l) => ({ ...l, organisation_id: organisationId })));
 }
 
-/**
- * Points every item of the organisation at the level its stored energy falls in, by classify() in lib/domain: the
- * one place the rule is written, so SQL never holds a second copy.
- */
-export async function reclassifyItems(trx: Conn, organisationId: string): Promise<number> {
-  const ladder = await listLadder(organisationId, trx);
-  const items: { id: string; effective_energy_j: number | null }[] = await trx('items')
+/** Points every item of the organisation at the level its stored energy falls in, in one statement per chunk. */
+async function reclassifyItems(trx: Conn, organisationId: string, ladder: readonly LadderBound[], classify: Classifier): Promise<number> {
+  const rows: { id: string; effective_energy_j: number | null }[] = await trx('items')
     .where({ organisation_id: organisationId })
     .select('id', 'effective_energy_j');
-  if (items.length === 0) return 0;
-  const result: { rowCount: number } = await trx.raw(
-    `UPDATE items AS i SET consequence_level_id = v.level
-       FROM unnest(?::uuid[], ?::uuid[]) AS v(id, level)
-      WHERE i.id = v.id AND i.organisation_id = ?`,
-    // pg sends each JS array as a PostgreSQL array; null entries stay NULL.
-    [items.map((i) => i.id), items.map((i) => classify(i.effective_energy_j, ladder)), organisationId] as unknown as string[],
-  );
-  return result.rowCount;
+  const CHUNK = 5000;
+  for (let start = 0; start < rows.length; start += CHUNK) {
+    const slice = rows.slice(start, start + CHUNK);
+    await trx.raw(
+      `UPDATE items AS i SET consequence_level_id = v.level FROM unnest(?::uuid[], ?::uuid[]) AS v(id, level) WHERE i.id = v.id`,
+      [slice.map((r) => r.id), slice.map((r) => classify(r.effective_energy_j, ladder))] as unknown as string[][],
+    );
+  }
+  return rows.length;
 }
 
 /**
@@ -45,6 +42,7 @@ export async function replaceLadder(
   organisationId: string,
   actorUserId: string,
   input: LadderInput,
+  classify: Classifier,
   conn: Conn = getDb(),
 ): Promise<{ ladder: ConsequenceLevel[]; reclassified: number }> {
   return conn.transaction(async (trx) => {
@@ -57,8 +55,8 @@ export async function replaceLadder(
     await trx('consequence_levels').insert(
       input.levels.map((l, i) => ({ ...l, rank: i + 1, organisation_id: organisationId })),
     );
-    const reclassified = await reclassifyItems(trx, organisationId);
     const ladder = await listLadder(organisationId, trx);
+    const reclassified = await reclassifyItems(trx, organisationId, ladder, classify);
     const strip = (levels: ConsequenceLevel[]) => levels.map(({ name, lower_bound_j, colour }) => ({ name, lower_bound_j, colour }));
     await appendAudit(trx, {
       organisationId,

@@ -1,5 +1,4 @@
 import { isUuid, type RegisterRow } from '@/lib/domain';
-import { computeItem, fallHeight, type ComputedResult, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
 import type { RegisterExportRow } from '@/lib/register/csv';
 import type { ItemInput } from '@/lib/validation/item';
 import { ConflictError, NotFoundError } from '@/lib/errors';
@@ -7,10 +6,11 @@ import { appendAudit } from './audit';
 import { listLadder } from './consequence-levels';
 import { getDb } from './knex';
 import { lockItems, lockLevel, lockOrganisation, lockSite, lockSiteLevels, siteIdOf } from './locks';
+import { fallHeight, type FallSetting, type ItemPhysics, type ResultColumns, type ResultSource } from './results';
 import type { AuditRow, Conn, ItemRow, LevelRow, SiteRow } from './types';
 
 /** The stored result's columns, written together whenever an item's fall is computed. */
-export const RESULT_COLUMNS = [
+export const RESULT_COLUMNS: readonly (keyof ResultColumns)[] = [
   'fall_time_s',
   'impact_speed_m_s',
   'impact_energy_j',
@@ -21,7 +21,7 @@ export const RESULT_COLUMNS = [
   'model_version',
   'inputs_hash',
   'compute_error',
-] as const;
+];
 const RESULT_TYPES = ['float8', 'float8', 'float8', 'float8', 'float8', 'bool', 'uuid', 'text', 'text', 'text'];
 
 /** The input fields an audit entry records: what a person changed, not what the computer derived. */
@@ -38,7 +38,7 @@ function duplicateTag(error: unknown, tag?: string): never {
   throw error;
 }
 
-type SettingRow = ItemPhysics & FallSetting & { id: string };
+export type SettingRow = ItemPhysics & FallSetting & { id: string };
 
 function settingQuery(trx: Conn, organisationId: string) {
   return trx('items as i')
@@ -63,8 +63,21 @@ function settingQuery(trx: Conn, organisationId: string) {
     );
 }
 
+/**
+ * The items of a site or a level with what their falls depend on, read without locks: what a caller solves before
+ * it writes. Pass `setting` to read them as they will be under changed site or level conditions.
+ */
+export async function itemSettings(
+  organisationId: string,
+  scope: { siteId: string } | { levelId: string },
+  conn: Conn = getDb(),
+): Promise<SettingRow[]> {
+  const query = settingQuery(conn, organisationId);
+  return 'siteId' in scope ? query.where('i.site_id', scope.siteId) : query.where('i.level_id', scope.levelId);
+}
+
 /** Writes many items' results in one statement per chunk: a site with thousands of items recomputes in one go. */
-async function writeResults(trx: Conn, ids: string[], results: ComputedResult[]): Promise<void> {
+export async function writeResults(trx: Conn, ids: string[], results: ResultColumns[]): Promise<void> {
   const CHUNK = 2000;
   for (let start = 0; start < ids.length; start += CHUNK) {
     const slice = results.slice(start, start + CHUNK);
@@ -81,11 +94,11 @@ async function writeResults(trx: Conn, ids: string[], results: ComputedResult[])
 }
 
 /**
- * Recomputes the stored results of the site's or the level's items inside the caller's transaction: whoever changes
+ * Rewrites the stored results of the site's or the level's items inside the caller's transaction: whoever changes
  * an input of a fall also rewrites its result before committing, so no stored energy is ever stale. The caller holds
  * the site (and the level) locked for a change; the items are locked here, in id order, before they are read.
  */
-export async function recomputeItems(trx: Conn, organisationId: string, scope: { siteId: string } | { levelId: string }): Promise<number> {
+export async function recomputeItems(trx: Conn, organisationId: string, scope: { siteId: string } | { levelId: string }, resultFor: ResultSource): Promise<number> {
   const ids = await lockItems(trx, organisationId, scope);
   if (!ids.length) return 0;
   const rows: SettingRow[] = await settingQuery(trx, organisationId).whereRaw('i.id = ANY(?::uuid[])', [ids]);
@@ -93,7 +106,7 @@ export async function recomputeItems(trx: Conn, organisationId: string, scope: {
   await writeResults(
     trx,
     rows.map((r) => r.id),
-    rows.map((r) => computeItem(r, r, ladder)),
+    rows.map((r) => resultFor(r, r, ladder)),
   );
   return rows.length;
 }
@@ -118,13 +131,13 @@ function toRow(input: ItemInput) {
   return { ...inputFields(input), dimensions_m: JSON.stringify(input.dimensions_m) };
 }
 
-export async function createItem(organisationId: string, actorUserId: string, siteId: string, input: ItemInput, conn: Conn = getDb()): Promise<ItemRow> {
+export async function createItem(organisationId: string, actorUserId: string, siteId: string, input: ItemInput, resultFor: ResultSource, conn: Conn = getDb()): Promise<ItemRow> {
   return conn.transaction(async (trx) => {
     await lockOrganisation(trx, organisationId, 'share');
     const site = await lockSite(trx, organisationId, siteId, 'share');
     if (!site) throw new NotFoundError('No such site');
     const setting = await lockedSetting(trx, organisationId, site, input.level_id);
-    const result = computeItem(input, setting, await listLadder(organisationId, trx));
+    const result = resultFor(input, setting, await listLadder(organisationId, trx));
     const [row] = await trx('items')
       .insert({ ...toRow(input), ...result, computed_at: trx.fn.now(), organisation_id: organisationId, site_id: siteId })
       .returning('*')
@@ -134,13 +147,13 @@ export async function createItem(organisationId: string, actorUserId: string, si
   });
 }
 
-export async function updateItem(organisationId: string, actorUserId: string, itemId: string, input: ItemInput, conn: Conn = getDb()): Promise<ItemRow> {
+export async function updateItem(organisationId: string, actorUserId: string, itemId: string, input: ItemInput, resultFor: ResultSource, conn: Conn = getDb()): Promise<ItemRow> {
   return conn.transaction(async (trx) => {
     const site = await lockItemSite(trx, organisationId, itemId);
     const setting = await lockedSetting(trx, organisationId, site, input.level_id);
     const before: ItemRow | undefined = await trx('items').where({ id: itemId, organisation_id: organisationId }).forUpdate().first();
     if (!before) throw new NotFoundError('No such item');
-    const result = computeItem(input, setting, await listLadder(organisationId, trx));
+    const result = resultFor(input, setting, await listLadder(organisationId, trx));
     const [row] = await trx('items')
       .where({ id: itemId })
       .update({ ...toRow(input), ...result, computed_at: trx.fn.now(), updated_at: trx.fn.now() })
@@ -179,6 +192,7 @@ export async function importItems(
   siteId: string,
   inputs: { line: number; item: ItemInput }[],
   meta: { file_name: string; mode: string; skipped_rows: number },
+  resultFor: ResultSource,
   conn: Conn = getDb(),
 ): Promise<number> {
   return conn.transaction(async (trx) => {
@@ -191,7 +205,7 @@ export async function importItems(
     const rows = inputs.map(({ line, item: input }) => {
       const level = byId.get(input.level_id);
       if (!level) throw new ConflictError(`line ${line}.level`, 'A level named in the file no longer exists: nothing was imported.', 422);
-      const result = computeItem(input, { ...level, altitude_m: site.altitude_m, design_wind_m_s: site.design_wind_m_s, current_m_s: site.current_m_s }, ladder);
+      const result = resultFor(input, { ...level, altitude_m: site.altitude_m, design_wind_m_s: site.design_wind_m_s, current_m_s: site.current_m_s }, ladder);
       return { ...toRow(input), ...result, computed_at: trx.fn.now(), organisation_id: organisationId, site_id: siteId };
     });
     // Two imports that share tags insert them in the same order, so they queue on the unique index instead of

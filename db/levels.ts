@@ -1,7 +1,9 @@
 import { ConflictError, NotFoundError } from '@/lib/errors';
+import { isUuid } from '@/lib/domain';
 import type { LevelInput } from '@/lib/validation/level';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';
+import type { ResultSource } from './results';
 import { getDb } from './knex';
 import { lockLevel, lockOrganisation, lockSite, siteIdOf, type LockMode } from './locks';
 import type { Conn, LevelRow } from './types';
@@ -15,7 +17,7 @@ function duplicateName(error: unknown, name: string): never {
   throw error;
 }
 
-function toColumns(input: LevelInput) {
+export function levelColumns(input: LevelInput) {
   return { name: input.name, floor_height_m: input.floor_height, surface: input.surface, water_depth_m: input.water_depth, notes: input.notes };
 }
 
@@ -43,13 +45,18 @@ export async function listLevels(organisationId: string, siteId: string, conn: C
   return rows.map((r) => ({ ...r, line_count: Number(r.line_count) }));
 }
 
+export async function findLevel(organisationId: string, siteId: string, levelId: string, conn: Conn = getDb()): Promise<LevelRow | undefined> {
+  if (!isUuid(levelId)) return undefined;
+  return conn<LevelRow>('site_levels').where({ id: levelId, site_id: siteId, organisation_id: organisationId }).first();
+}
+
 export async function createLevel(organisationId: string, actorUserId: string, siteId: string, input: LevelInput, conn: Conn = getDb()): Promise<LevelRow> {
   return conn.transaction(async (trx) => {
     await lockOrganisation(trx, organisationId, 'share');
     const site = await lockSite(trx, organisationId, siteId, 'share');
     if (!site) throw new NotFoundError('No such site');
     const [level] = await trx<LevelRow>('site_levels')
-      .insert({ ...toColumns(input), site_id: siteId, organisation_id: organisationId })
+      .insert({ ...levelColumns(input), site_id: siteId, organisation_id: organisationId })
       .returning('*')
       .catch((e) => duplicateName(e, input.name));
     await appendAudit(trx, { organisationId, actorUserId, action: 'level.created', entityType: 'level', entityId: level.id, after: { site_id: siteId, ...pick(level) } });
@@ -63,17 +70,18 @@ export async function updateLevel(
   actorUserId: string,
   levelId: string,
   input: LevelInput,
+  resultFor: ResultSource,
   conn: Conn = getDb(),
 ): Promise<{ level: LevelRow; recomputed: number }> {
   return conn.transaction(async (trx) => {
     const before = await lockLevelWithSite(trx, organisationId, levelId, 'change');
     const [level] = await trx<LevelRow>('site_levels')
       .where({ id: levelId })
-      .update({ ...toColumns(input), updated_at: trx.fn.now() })
+      .update({ ...levelColumns(input), updated_at: trx.fn.now() })
       .returning('*')
       .catch((e) => duplicateName(e, input.name));
     const changed = before.floor_height_m !== level.floor_height_m || before.surface !== level.surface || before.water_depth_m !== level.water_depth_m;
-    const recomputed = changed ? await recomputeItems(trx, organisationId, { levelId }) : 0;
+    const recomputed = changed ? await recomputeItems(trx, organisationId, { levelId }, resultFor) : 0;
     await appendAudit(trx, {
       organisationId,
       actorUserId,

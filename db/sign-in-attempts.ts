@@ -63,3 +63,12 @@ export async function markSignInSucceeded(id: string, conn: Conn = getDb()): Pro
 export async function cancelSignInAttempt(id: string, conn: Conn = getDb()): Promise<void> {
   await conn('sign_in_attempts').where({ id }).delete();
 }
+
+/** Deletes attempts older than `before`, a bounded batch at a time; the number deleted. */
+export async function pruneSignInAttempts(before: Date, batch = 10_000, conn: Conn = getDb()): Promise<number> {
+  const result = await conn.raw(
+    'DELETE FROM sign_in_attempts WHERE id IN (SELECT id FROM sign_in_attempts WHERE created_at < ? ORDER BY created_at LIMIT ?)',
+    [before, batch],
+  );
+  return result.rowCount ?? 0;
+}

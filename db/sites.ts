@@ -3,6 +3,7 @@ import { NotFoundError, ConflictError } from '@/lib/errors';
 import type { SiteInput } from '@/lib/validation/site';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';
+import type { ResultSource } from './results';
 import { getDb } from './knex';
 import { lockItems, lockOrganisation, lockSite, lockSiteLevels } from './locks';
 import type { Conn, SiteRow } from './types';
@@ -25,7 +26,7 @@ const SITE_FIELDS = ['name', 'kind', 'location', 'surface', 'water_depth_m', 'al
 /** The site fields that change a fall; the rest are descriptions or defaults for new levels. */
 const PHYSICS_FIELDS = ['altitude_m', 'design_wind_m_s', 'current_m_s'] as const;
 
-function toColumns(input: SiteInput) {
+export function siteColumns(input: SiteInput) {
   return {
     name: input.name,
     kind: input.kind,
@@ -81,7 +82,7 @@ export async function createSite(organisationId: string, actorUserId: string, in
   return conn.transaction(async (trx) => {
     await lockOrganisation(trx, organisationId, 'share');
     const [site] = await trx<SiteRow>('sites')
-      .insert({ ...toColumns(input), organisation_id: organisationId })
+      .insert({ ...siteColumns(input), organisation_id: organisationId })
       .returning('*')
       .catch((e) => duplicateName(e, input.name));
     await appendAudit(trx, { organisationId, actorUserId, action: 'site.created', entityType: 'site', entityId: site.id, after: pick(site) });
@@ -95,6 +96,7 @@ export async function updateSite(
   actorUserId: string,
   siteId: string,
   input: SiteInput,
+  resultFor: ResultSource,
   conn: Conn = getDb(),
 ): Promise<{ site: SiteRow; recomputed: number }> {
   return conn.transaction(async (trx) => {
@@ -103,11 +105,11 @@ export async function updateSite(
     if (!before) throw new NotFoundError('No such site');
     const [site] = await trx<SiteRow>('sites')
       .where({ id: siteId })
-      .update({ ...toColumns(input), updated_at: trx.fn.now() })
+      .update({ ...siteColumns(input), updated_at: trx.fn.now() })
       .returning('*')
       .catch((e) => duplicateName(e, input.name));
     const physicsChanged = PHYSICS_FIELDS.some((k) => before[k] !== site[k]);
-    const recomputed = physicsChanged ? await recomputeItems(trx, organisationId, { siteId }) : 0;
+    const recomputed = physicsChanged ? await recomputeItems(trx, organisationId, { siteId }, resultFor) : 0;
     await appendAudit(trx, {
       organisationId,
       actorUserId,

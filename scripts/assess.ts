@@ -1,66 +1,108 @@
 /**
  * Command line for the physics core: `npm run -s assess -- FILE` (or `-` for standard input).
- * Prints the result JSON (an array of results for an array of cases). Bad input exits 2 with one
- * line per wrong field on standard error; a case that cannot be solved exits 1.
+ * One case prints its result JSON; a list of cases prints a JSON list, one element per line,
+ * streamed as each case is solved: the result, or `{"error": {...}}` for a case that is bad or
+ * cannot be solved. Exit 0 when every case solved, 1 when some could not be solved, 2 when the
+ * input or any case is bad (one line per wrong field on standard error). Bundled by
+ * scripts/bundle.mjs into .build/assess.mjs; scripts/assess.mjs runs it.
  */
 import { readFileSync } from 'node:fs';
-import { z } from 'zod';
-import { PhysicsInputError, PhysicsSolveError, simulateDrop, type DropResult } from '@/lib/physics';
+import { PhysicsInputError, PhysicsSolveError, simulateDrop } from '@/lib/physics';
 import { dropCaseIssues, dropCaseSchema, physicsIssue } from '@/lib/schemas/drop-case';
 
-const USAGE = 'usage: npm run -s assess -- FILE   (FILE is a drop-case JSON file, or - for standard input)';
+const USAGE = 'usage: npm run -s assess -- FILE   (FILE is a drop-case JSON file or a list of cases, or - for standard input)';
 
-function fail(code: number, lines: string[]): never {
+/** A batch is solved case by case in one process; past this it should be split. */
+export const MAX_CASES = 100_000;
+
+type CaseError = { kind: 'input'; issues: { path: string; message: string }[] } | { kind: 'solve'; message: string };
+
+const EXIT = { ok: 0, solve: 1, input: 2 } as const;
+
+function fail(lines: string[]): never {
   for (const line of lines) process.stderr.write(line + '\n');
-  process.exit(code);
+  process.exit(EXIT.input);
 }
 
 function readInput(arg: string): string {
   try {
     return arg === '-' ? readFileSync(0, 'utf8') : readFileSync(arg, 'utf8');
   } catch (e) {
-    return fail(2, [`cannot read ${arg === '-' ? 'standard input' : arg}: ${(e as Error).message}`]);
+    return fail([`cannot read ${arg === '-' ? 'standard input' : arg}: ${(e as Error).message}`]);
   }
 }
 
-function main(argv: string[]): void {
+/** JSON that refuses NaN and infinities instead of printing them as null. */
+function strictJson(value: unknown, indent?: number): string {
+  return JSON.stringify(
+    value,
+    (key, v) => {
+      if (typeof v === 'number' && !Number.isFinite(v)) throw new PhysicsSolveError(`${key || 'a value'} came out as ${v}`);
+      return v;
+    },
+    indent,
+  );
+}
+
+/** The JSON text for one case and what became of it. */
+function solveOne(input: unknown): { text: (indent?: number) => string; error: CaseError | null } {
+  const parsed = dropCaseSchema.safeParse(input);
+  let error: CaseError;
+  if (parsed.success) {
+    try {
+      const result = simulateDrop(parsed.data);
+      const json = strictJson(result);
+      return { text: (indent) => (indent ? strictJson(result, indent) : json), error: null };
+    } catch (e) {
+      if (e instanceof PhysicsInputError) error = { kind: 'input', issues: [physicsIssue(e)] };
+      else if (e instanceof PhysicsSolveError) error = { kind: 'solve', message: e.message };
+      else throw e;
+    }
+  } else {
+    error = { kind: 'input', issues: dropCaseIssues(parsed.error) };
+  }
+  return { text: (indent) => JSON.stringify({ error }, null, indent), error };
+}
+
+function describe(error: CaseError, where: string): string[] {
+  return error.kind === 'input' ? error.issues.map((i) => `${where}${i.path}: ${i.message}`) : [`${where}cannot solve: ${error.message}`];
+}
+
+async function write(text: string): Promise<void> {
+  if (!process.stdout.write(text)) await new Promise<void>((resolve) => process.stdout.once('drain', resolve));
+}
+
+async function main(argv: string[]): Promise<number> {
   const args = argv.filter((a) => a !== '--');
-  if (args.length !== 1 || args[0] === '-h' || args[0] === '--help') fail(2, [USAGE]);
-  const text = readInput(args[0]);
+  if (args.length !== 1 || args[0] === '-h' || args[0] === '--help') fail([USAGE]);
   let json: unknown;
   try {
-    json = JSON.parse(text);
+    json = JSON.parse(readInput(args[0]));
   } catch (e) {
-    fail(2, [`input is not valid JSON: ${(e as Error).message}`]);
+    fail([`input is not valid JSON: ${(e as Error).message}`]);
   }
-  const batch = Array.isArray(json);
-  const parsed = (batch ? z.array(dropCaseSchema).min(1, 'the list of cases is empty') : dropCaseSchema).safeParse(json);
-  if (!parsed.success) {
-    fail(
-      2,
-      dropCaseIssues(parsed.error).map(({ path, message }) => {
-        if (!batch) return `${path}: ${message}`;
-        const [index, ...rest] = path.split('.');
-        return /^\d+$/.test(index) ? `case ${index}: ${rest.join('.') || '(case)'}: ${message}` : `${path}: ${message}`;
-      }),
-    );
+  if (!Array.isArray(json)) {
+    const one = solveOne(json);
+    if (one.error) for (const line of describe(one.error, '')) process.stderr.write(line + '\n');
+    await write(one.text(2) + '\n');
+    return one.error ? EXIT[one.error.kind] : EXIT.ok;
   }
-  const cases = batch ? (parsed.data as z.output<typeof dropCaseSchema>[]) : [parsed.data as z.output<typeof dropCaseSchema>];
-  const results: DropResult[] = [];
-  cases.forEach((c, i) => {
-    const where = batch ? `case ${i}: ` : '';
-    try {
-      results.push(simulateDrop(c));
-    } catch (e) {
-      if (e instanceof PhysicsInputError) {
-        const issue = physicsIssue(e);
-        fail(2, [`${where}${issue.path}: ${issue.message}`]);
-      }
-      if (e instanceof PhysicsSolveError) fail(1, [`${where}cannot solve: ${e.message}`]);
-      throw e;
+  if (json.length === 0) fail(['the list of cases is empty']);
+  if (json.length > MAX_CASES) fail([`at most ${MAX_CASES} cases in one run, got ${json.length}: split the list`]);
+  let code: number = EXIT.ok;
+  await write('[\n');
+  for (let i = 0; i < json.length; i++) {
+    const one = solveOne(json[i]);
+    if (one.error) {
+      for (const line of describe(one.error, `case ${i}: `)) process.stderr.write(line + '\n');
+      code = Math.max(code, EXIT[one.error.kind]);
     }
-  });
-  process.stdout.write(JSON.stringify(batch ? results : results[0], null, 2) + '\n');
+    await write(one.text() + (i + 1 < json.length ? ',\n' : '\n'));
+  }
+  await write(']\n');
+  return code;
 }
 
-main(process.argv.slice(2));
+main(process.argv.slice(2)).then((code) => {
+  process.exitCode = code;
+});

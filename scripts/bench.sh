@@ -27,7 +27,8 @@ node_modules/.bin/tsx bench/index.ts
 export PLUMBLINE_DIST_DIR=".next-bench"
 log "production build for the page timing"
 node_modules/.bin/next build >"$DATA_DIR/bench-build.log" 2>&1 || { tail -40 "$DATA_DIR/bench-build.log" >&2; die "build failed"; }
-PORT="$BENCH_PORT" NODE_ENV=production LOG_LEVEL=warn node .build/server.mjs >"$DATA_DIR/bench-server.log" 2>&1 &
+# One trusted proxy hop, so the sign-in flood can arrive from many addresses as it would through a load balancer.
+PORT="$BENCH_PORT" NODE_ENV=production LOG_LEVEL=warn TRUST_PROXY_HOPS=1 node .build/server.mjs >"$DATA_DIR/bench-server.log" 2>&1 &
 APP_PID=$!
 for _ in $(seq 1 60); do
   if node -e "fetch('http://127.0.0.1:$BENCH_PORT/api/health').then(r=>process.exit(r.ok?0:1),()=>process.exit(1))"; then break; fi
@@ -37,3 +38,5 @@ log "register"
 BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/register.ts
 log "drops and health under load"
 BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/drops.ts
+log "health during a sign-in flood"
+BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/sign-in-flood.ts

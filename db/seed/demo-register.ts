@@ -2,6 +2,7 @@
 // the register has something to show on first start. Every value passes the same schemas as user input.
 import type { DimensionKey, ItemCategory, Securing } from '@/lib/domain';
 import type { ShapeChoice } from '@/lib/shape-choice';
+import { computeItem } from '@/lib/register/compute';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';
@@ -248,9 +249,10 @@ const TURBINE: DemoSite = {
 const DEMO_SITES = [TOWER, PLATFORM, TURBINE];
 
 /**
- * Adds the demo sites, levels and items through the same functions the pages use, so every item is stored with
- * its computed fall and an audit entry. Pass the transaction that creates the organisation: a failure part-way
- * leaves no half-seeded demo behind, and the next start seeds it again.
+ * Adds the demo sites, levels and items through the same write functions the pages use, so every item is stored
+ * with its computed fall and an audit entry. Pass the transaction that creates the organisation: a failure
+ * part-way leaves no half-seeded demo behind, and the next start seeds it again. The demo's 68 falls are solved
+ * inside that transaction, which nobody else is waiting for.
  */
 export async function seedDemoRegister(organisationId: string, actorUserId: string, conn: Conn = getDb()): Promise<void> {
   for (const { levels, ...site } of DEMO_SITES) {
@@ -258,7 +260,7 @@ export async function seedDemoRegister(organisationId: string, actorUserId: stri
     for (const { items, ...level } of levels) {
       const { id: levelId } = await createLevel(organisationId, actorUserId, siteId, levelSchema('si').parse(level), conn);
       for (const item of items) {
-        await createItem(organisationId, actorUserId, siteId, itemSchema('si').parse({ ...item, level_id: levelId }), conn);
+        await createItem(organisationId, actorUserId, siteId, itemSchema('si').parse({ ...item, level_id: levelId }), computeItem, conn);
       }
     }
   }

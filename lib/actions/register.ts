@@ -1,10 +1,10 @@
 'use server';
 
-import { replaceLadder } from '@/db/consequence-levels';
-import { createItem, deleteItem, updateItem } from '@/db/items';
-import { createLevel, deleteLevel, updateLevel } from '@/db/levels';
-import { createSite, deleteSite, updateSite } from '@/db/sites';
+import { deleteItem } from '@/db/items';
+import { createLevel, deleteLevel } from '@/db/levels';
+import { createSite, deleteSite } from '@/db/sites';
 import { isUuid } from '@/lib/domain';
+import { createItem, replaceLadder, updateItem, updateLevel, updateSite } from '@/lib/register/commands';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';

@@ -42,10 +42,20 @@ function state(): PoolState {
   return holder.plumblineHashPool;
 }
 
+/** The error a full pool answers with (HTTP 503 and Retry-After). */
+export function busyError(): UnavailableError {
+  return new UnavailableError(HASH_BUSY, HASH_RETRY_AFTER_S);
+}
+
+/** True when the next task would be refused: callers with database work before the hash check this first. */
+export function hashPoolFull(): boolean {
+  return hashesInHand() >= HASH_QUEUE_LIMIT;
+}
+
 /** Runs one task off the event loop, or throws UnavailableError (HTTP 503) when HASH_QUEUE_LIMIT are in hand. */
 export async function runHash<T extends string | boolean>(task: HashTask): Promise<T> {
   const s = state();
-  if (s.admitted >= HASH_QUEUE_LIMIT) throw new UnavailableError(HASH_BUSY, HASH_RETRY_AFTER_S);
+  if (s.admitted >= HASH_QUEUE_LIMIT) throw busyError();
   s.admitted += 1;
   try {
     return (await s.pool.run(task)) as T;

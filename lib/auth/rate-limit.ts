@@ -61,6 +61,11 @@ export function refusalFor(history: AttemptHistory, now: Date): Refusal | null {
   return null;
 }
 
+/** Attempts older than the longest look-back (the known-address days, and a day to spare) are of no use. */
+export function pruneBefore(now: Date): Date {
+  return new Date(now.getTime() - (KNOWN_ADDRESS_DAYS + 1) * 86_400_000);
+}
+
 /** The window the limits count over, and how far back a successful sign-in makes an address known. */
 export function limitWindows(now: Date): { windowStart: Date; knownSince: Date } {
   return {

@@ -4,5 +4,4 @@ export * from './roles';
 export * from './register';
 export * from './shapes';
 export * from './quantity-rules';
-export * from './ladder';
 export * from './ids';

@@ -1,6 +1,7 @@
 import { MAX_SAMPLES, STANDARD_GRAVITY } from './constants';
+import { INPUT_LIMITS, requireWithin, type LimitName } from './limits';
 import { dragCoefficients, isDragModel, terminalSpeed, type DragCoefficients, type DragModel, DRAG_MODELS } from './drag';
-import { PhysicsInputError, requireFinite, requireInteger, requireNonNegative, requirePositive } from './errors';
+import { PhysicsInputError, requireInteger, requireNonNegative, requirePositive } from './errors';
 import { resolveMedium, type Medium, type MediumSpec } from './media';
 import { shapeProperties, type ShapeId, type ShapeProperties } from './shapes';
 
@@ -80,13 +81,17 @@ export interface ResolvedCase {
  * Below a micrometre a fall is not a meaningful planning case, and the tolerances, which scale
  * with the height, would fall below what double precision can resolve near the ground.
  */
-export const MIN_HEIGHT_M = 1e-6;
+export const MIN_HEIGHT_M = INPUT_LIMITS.height_m.min;
 
 function requireHeight(field: string, value: unknown, zeroAllowed: boolean): number {
   const h = zeroAllowed ? requireNonNegative(field, value) : requirePositive(field, value);
   if (h !== 0 && h < MIN_HEIGHT_M) throw new PhysicsInputError(field, `must be ${zeroAllowed ? '0 or ' : ''}at least ${MIN_HEIGHT_M} m, got ${h}`);
-  return h;
+  return h === 0 ? 0 : requireWithin(field, h, 'height_m');
 }
+
+/** The sign rule's own message first (e.g. "must be greater than zero"), then the model's limits. */
+const positiveWithin = (name: LimitName) => (field: string, value: unknown) => requireWithin(field, requirePositive(field, value), name);
+const nonNegativeWithin = (name: LimitName) => (field: string, value: unknown) => requireWithin(field, requireNonNegative(field, value), name);
 
 function isObject(value: unknown): value is Record<string, unknown> {
   return value !== null && typeof value === 'object' && !Array.isArray(value);
@@ -98,12 +103,12 @@ function optionalNumber(field: string, value: unknown, check: (f: string, v: unk
 
 export function resolveObject(spec: unknown, field = 'object'): ResolvedObject {
   if (!isObject(spec)) throw new PhysicsInputError(field, 'must be an object with at least mass_kg');
-  const mass = requirePositive(`${field}.mass_kg`, spec.mass_kg);
-  const cd = optionalNumber(`${field}.cd`, spec.cd, requireNonNegative);
-  const area = optionalNumber(`${field}.area_m2`, spec.area_m2, requirePositive);
-  const volume = optionalNumber(`${field}.volume_m3`, spec.volume_m3, requireNonNegative);
-  const ca = optionalNumber(`${field}.added_mass_coeff`, spec.added_mass_coeff, requireNonNegative);
-  optionalNumber(`${field}.linear_coeff_kg_s`, spec.linear_coeff_kg_s, requireNonNegative);
+  const mass = positiveWithin('mass_kg')(`${field}.mass_kg`, spec.mass_kg);
+  const cd = optionalNumber(`${field}.cd`, spec.cd, nonNegativeWithin('cd'));
+  const area = optionalNumber(`${field}.area_m2`, spec.area_m2, positiveWithin('area_m2'));
+  const volume = optionalNumber(`${field}.volume_m3`, spec.volume_m3, nonNegativeWithin('volume_m3'));
+  const ca = optionalNumber(`${field}.added_mass_coeff`, spec.added_mass_coeff, nonNegativeWithin('added_mass_coeff'));
+  optionalNumber(`${field}.linear_coeff_kg_s`, spec.linear_coeff_kg_s, nonNegativeWithin('linear_coeff_kg_s'));
   let shape: ShapeProperties | null = null;
   if (spec.shape !== undefined) shape = shapeProperties(spec.shape, spec.dimensions_m, mass, field);
   else if (spec.dimensions_m !== undefined) throw new PhysicsInputError(`${field}.shape`, 'is required when dimensions_m is given');
@@ -132,7 +137,7 @@ export function resolveDropCase(input: unknown): ResolvedCase {
     throw new PhysicsInputError('drag_model', `must be one of ${DRAG_MODELS.map((m) => `"${m}"`).join(', ')}, got ${JSON.stringify(input.drag_model)}`);
   }
   const dragModel = input.drag_model;
-  const g = input.gravity_m_s2 === undefined ? STANDARD_GRAVITY : requirePositive('gravity_m_s2', input.gravity_m_s2);
+  const g = input.gravity_m_s2 === undefined ? STANDARD_GRAVITY : positiveWithin('gravity_m_s2')('gravity_m_s2', input.gravity_m_s2);
 
   const release = input.release === undefined ? {} : input.release;
   if (!isObject(release)) throw new PhysicsInputError('release', 'must be an object');
@@ -140,7 +145,7 @@ export function resolveDropCase(input: unknown): ResolvedCase {
   if (release.velocity_m_s !== undefined) {
     const v = release.velocity_m_s;
     if (!Array.isArray(v) || v.length !== 2) throw new PhysicsInputError('release.velocity_m_s', 'must be [horizontal, vertical] in m/s');
-    v0 = [requireFinite('release.velocity_m_s.0', v[0]), requireFinite('release.velocity_m_s.1', v[1])];
+    v0 = [requireWithin('release.velocity_m_s.0', v[0], 'velocity_m_s'), requireWithin('release.velocity_m_s.1', v[1], 'velocity_m_s')];
   }
 
   const layerSpecs: { medium: unknown; thickness: number; flow: number; field: string }[] = [];
@@ -159,7 +164,7 @@ export function resolveDropCase(input: unknown): ResolvedCase {
       layerSpecs.push({
         medium: layer.medium,
         thickness: requireHeight(`${f}.thickness_m`, layer.thickness_m, false),
-        flow: layer.flow_m_s === undefined ? 0 : requireFinite(`${f}.flow_m_s`, layer.flow_m_s),
+        flow: layer.flow_m_s === undefined ? 0 : requireWithin(`${f}.flow_m_s`, layer.flow_m_s, 'flow_m_s'),
         field: f,
       });
     });
@@ -169,7 +174,7 @@ export function resolveDropCase(input: unknown): ResolvedCase {
     layerSpecs.push({
       medium: input.medium,
       thickness: requireHeight('release.height_m', release.height_m, true),
-      flow: input.wind_m_s === undefined ? 0 : requireFinite('wind_m_s', input.wind_m_s),
+      flow: input.wind_m_s === undefined ? 0 : requireWithin('wind_m_s', input.wind_m_s, 'flow_m_s'),
       field: '',
     });
   }

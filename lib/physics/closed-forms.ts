@@ -67,9 +67,13 @@ function phi1(s: number): number {
   return -Math.expm1(-s) / s;
 }
 
-/** (s − 1 + e^(−s)) / s², accurate near s = 0. */
+/**
+ * (s − 1 + e^(−s)) / s², accurate near s = 0. For s ≥ 1 it is written (1 − φ₁(s)) / s, which
+ * neither cancels there nor overflows where s² would (β·t beyond 1e154).
+ */
 function phi2(s: number): number {
   if (Math.abs(s) < 1e-3) return 0.5 - s / 6 + (s * s) / 24 - (s * s * s) / 120 + (s * s * s * s) / 720;
+  if (s >= 1) return (1 - phi1(s)) / s;
   return (s + Math.expm1(-s)) / (s * s);
 }
 
@@ -81,7 +85,8 @@ function phi2(s: number): number {
 export function linearFall(p: ClosedFormParams): ClosedFormFall {
   const { height_m: h, vx0, vy0, gravity: G, linear_per_s: beta, flow_m_s: w } = p;
   const vt = G / beta;
-  const y = (t: number) => h + vy0 * t * phi1(beta * t) - G * t * t * phi2(beta * t);
+  // t·(v₀·φ₁ − G·t·φ₂) rather than G·t², which overflows for the longest falls.
+  const y = (t: number) => h + t * (vy0 * phi1(beta * t) - G * (t * phi2(beta * t)));
   const vy = (t: number) => vy0 * Math.exp(-beta * t) - G * t * phi1(beta * t);
   const tApex = vy0 > 0 ? Math.log1p(vy0 / vt) / beta : null;
   let t = 0;
@@ -134,9 +139,12 @@ function logCosh(x: number): number {
 }
 
 /**
- * Quadratic drag, vertical. From rest: v = v_t·tanh(G·t/v_t), y = h − (v_t²/G)·ln cosh(G·t/v_t),
- * t(h) = (v_t/G)·arcosh(exp(G·h/v_t²)). A downward throw shifts the phase (coth above v_t);
- * an upward throw first rises (v_t²/2G)·ln(1 + v₀²/v_t²) in (v_t/G)·atan(v₀/v_t).
+ * Quadratic drag, vertical. Falling from speed s₀ = a·v_t, the distance after t is
+ * L·ln(cosh τ + a·sinh τ) with τ = G·t/v_t and L = v_t²/G (from rest a = 0: the textbook
+ * y = h − L·ln cosh(G·t/v_t); above v_t the coth branch gives the same expression), so the
+ * fall time is one monotone root in τ, solved in a form that neither cancels for a drop much
+ * shorter than L nor overflows for one much longer. An upward throw first rises
+ * (L/2)·ln(1 + v₀²/v_t²) in (v_t/G)·atan(v₀/v_t), then falls from rest.
  */
 export function quadraticFall(h: number, vy0: number, G: number, kappa: number): ClosedFormFall {
   const vt = Math.sqrt(G / kappa);
@@ -148,20 +156,12 @@ export function quadraticFall(h: number, vy0: number, G: number, kappa: number):
   if (vy0 > 0) {
     const rise = 0.5 * Lg * Math.log1p((vy0 / vt) ** 2);
     apex = h + rise;
-    const tDown = T * arcoshExp((h + rise) / Lg);
-    t = T * Math.atan(vy0 / vt) + tDown;
-    speed = vt * Math.tanh(tDown / T);
+    const tau = descentPhase((h + rise) / Lg, 0);
+    t = T * Math.atan(vy0 / vt) + T * tau;
+    speed = vt * Math.tanh(tau);
   } else {
     const s0 = -vy0;
-    if (s0 < vt) {
-      const phase = Math.atanh(s0 / vt);
-      t = T * (arcoshExp(logCosh(phase) + h / Lg) - phase);
-    } else if (s0 > vt) {
-      const phase = Math.atanh(vt / s0);
-      t = T * (asinhExp(logSinh(phase) + h / Lg) - phase);
-    } else {
-      t = h / vt;
-    }
+    t = T * descentPhase(h / Lg, s0 / vt);
     // v² relaxes to v_t² exponentially with the distance fallen: v² = v_t² + (v₀² − v_t²)·e^(−2h/L).
     // Written with expm1 so a short drop (h ≪ v_t²/G) keeps its digits.
     speed = Math.sqrt(-vt * vt * Math.expm1((-2 * h) / Lg) + s0 * s0 * Math.exp((-2 * h) / Lg));
@@ -174,6 +174,41 @@ export function quadraticFall(h: number, vy0: number, G: number, kappa: number):
     apex_height_m: apex,
     method: 'quadratic',
   };
+}
+
+/**
+ * The τ ≥ 0 with ln(cosh τ + a·sinh τ) = H, for a ≥ 0 and H ≥ 0. The textbook forms
+ * (arcosh from rest; with φ = artanh a or artanh(1/a), arcosh/arsinh of e^(ln cosh φ + H) − φ)
+ * give it directly but cancel when H ≪ ln cosh φ, a short drop thrown down, so Newton steps on
+ * the equation itself finish the job: it is convex in τ for a < 1 and concave for a > 1, so
+ * Newton converges monotonically after its first step from any start at or below the root.
+ */
+function descentPhase(H: number, a: number): number {
+  if (H === 0) return 0;
+  if (a === 0) return arcoshExp(H);
+  if (a === 1) return H;
+  let tau = a < 1 ? arcoshExp(logCosh(Math.atanh(a)) + H) - Math.atanh(a) : asinhExp(logSinh(Math.atanh(1 / a)) + H) - Math.atanh(1 / a);
+  if (!(tau > 0)) tau = 0;
+  for (let i = 0; i < 100; i++) {
+    let F: number;
+    let dF: number;
+    if (tau < 20) {
+      // cosh τ − 1 = 2·sinh²(τ/2) keeps the digits of a small τ.
+      const sh = Math.sinh(tau);
+      const ch = Math.cosh(tau);
+      F = Math.log1p(2 * Math.sinh(tau / 2) ** 2 + a * sh) - H;
+      dF = (sh + a * ch) / (ch + a * sh);
+    } else {
+      // Past τ = 20 the e^(−2τ) terms are below rounding beside 1 + a: no overflow.
+      const e = Math.exp(-2 * tau);
+      F = tau + Math.log(0.5 * (1 + a) + 0.5 * (1 - a) * e) - H;
+      dF = (1 + a - (1 - a) * e) / (1 + a + (1 - a) * e);
+    }
+    const step = F / dF;
+    tau -= step;
+    if (Math.abs(step) <= 1e-15 * tau) break;
+  }
+  return tau;
 }
 
 /**

@@ -1,5 +1,5 @@
 /** Reported with every result so stored results can be traced to the model that produced them. */
-export const MODEL_VERSION = 'plumbline-physics 1.0.0';
+export const MODEL_VERSION = 'plumbline-physics 1.1.0';
 
 /** Standard acceleration of gravity, m/s² (3rd CGPM, 1901). */
 export const STANDARD_GRAVITY = 9.80665;

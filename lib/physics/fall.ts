@@ -1,7 +1,7 @@
 import { resolveDropCase, type DropCase, type ResolvedCase, type ResolvedLayer } from './case';
 import { reynoldsRegime, regimeMismatch, relativeDeviation, verify, type ReynoldsRegime, type Verification } from './classification';
 import { closedFormFall } from './closed-forms';
-import { MAX_SAMPLES, MODEL_VERSION } from './constants';
+import { MAX_SAMPLES, MODEL_VERSION, VERIFICATION_THRESHOLD } from './constants';
 import { PhysicsInputError, PhysicsSolveError, requireInteger } from './errors';
 import {
   integrate,
@@ -32,11 +32,38 @@ export interface LayerReport {
   readonly top_m: number;
   readonly bottom_m: number;
   readonly terminal_speed_m_s: number | null;
-  /** Null for layers below the one the object floats in. */
+  /** Arrival at the top of the layer (its upper surface); null below the layer the object floats in. */
   readonly entry_time_s: number | null;
   readonly entry_speed_m_s: number | null;
+  readonly entry_velocity_m_s: [number, number] | null;
+  /** ½·m·v² on arrival. */
+  readonly entry_kinetic_energy_j: number | null;
+  /** ½·(m + m_a)·v² on arrival, with the added mass of this layer's medium (zero in a gas). */
+  readonly entry_effective_energy_j: number | null;
   /** Null when the object does not pass through the layer (it floats in it or above it). */
   readonly exit_time_s: number | null;
+  /** Set where the analytic terminal tail finished the layer. */
+  readonly analytic_tail: TailReport | null;
+}
+
+/** Arrival at one surface: a water surface or the bottom. */
+export interface SurfaceArrival {
+  /** The layer whose top (water entry) or bottom (seabed) this is. */
+  readonly layer_index: number;
+  readonly time_s: number;
+  readonly speed_m_s: number;
+  readonly velocity_m_s: [number, number];
+  readonly kinetic_energy_j: number;
+  /** With the added mass of the liquid: what a struck body takes, per DNV-RP-F107's E = ½(m + m_a)v². */
+  readonly effective_energy_j: number;
+}
+
+/** Where the analytic terminal tail took over a layer, and a bound on the error it adds. */
+export interface TailReport {
+  readonly from_time_s: number;
+  /** Distance from terminal velocity there, relative to the terminal speed. */
+  readonly deviation: number;
+  readonly time_error_bound_s: number;
 }
 
 export interface DropSamples {
@@ -82,6 +109,13 @@ export interface DropResult {
   readonly verification: Verification | null;
   readonly vacuum: { fall_time_s: number; impact_speed_m_s: number; impact_energy_j: number };
   readonly layers: LayerReport[];
+  /**
+   * First passage from a gas into a liquid: what a boat, a lower landing or a person in the
+   * water takes. Null when the fall starts in the liquid or never meets one.
+   */
+  readonly water_entry: SurfaceArrival | null;
+  /** Arrival at the bottom of a liquid bottom layer: what subsea equipment takes. Null if it floats or the bottom is dry. */
+  readonly seabed: SurfaceArrival | null;
   readonly energy_audit?: EnergyAudit;
   readonly warnings: string[];
   readonly notice: string;
@@ -101,8 +135,9 @@ interface LayerRun {
   /** The odex request and options, kept so plot samples can replay exactly the same steps. */
   readonly request: IntegrationRequest | null;
   readonly options: Required<IntegratorOptions> | null;
-  /** Where the state reached terminal velocity and the rest of the layer is straight-line motion. */
+  /** Where the state (relative frame) reached terminal velocity and the analytic tail took over. */
   readonly steadyFrom: { t: number; s: number[] } | null;
+  readonly tail: TailReport | null;
 }
 
 interface ValidOptions {
@@ -144,7 +179,7 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
       floatsIn = layer;
       break;
     }
-    const run = runLayer(layer, t, state, layer.index === 0 && vy0 > 0, c, opts);
+    const run = runLayer(layer, t, state, layer.index === 0 && vy0 > 0, opts);
     runs.push(run);
     t = run.t1;
     state = run.s1;
@@ -168,6 +203,7 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
 
   const vac = closedFormFall({ height_m: c.height_m, vx0, vy0, gravity: c.gravity_m_s2, linear_per_s: 0, quadratic_per_m: 0, flow_m_s: 0 })!;
 
+  const layers = layerReports(c, runs);
   const result: DropResult = {
     model_version: MODEL_VERSION,
     sinks: floatsIn === null,
@@ -188,14 +224,35 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
     closed_form_rel_deviation: deviation,
     verification,
     vacuum: { fall_time_s: vac.fall_time_s, impact_speed_m_s: vac.impact_speed_m_s, impact_energy_j: 0.5 * m * vac.impact_speed_m_s ** 2 },
-    layers: layerReports(c, runs),
-    warnings: warningsFor(c, runs, floatsIn, regime.regime, deviation),
+    layers,
+    water_entry: waterEntry(c, layers),
+    seabed: floatsIn === null && endLayer.medium.phase === 'liquid' ? arrival(endLayer, m, t, vx, vy) : null,
+    warnings: warningsFor(c, runs, floatsIn, regime.regime, deviation, t),
     notice: NOTICE,
   };
   const extras: { energy_audit?: EnergyAudit; samples?: DropSamples } = {};
   if (opts.energyAudit) extras.energy_audit = energyAudit(c, runs);
   if (sampleCount > 0) extras.samples = sampleRuns(runs, t, state, sampleCount);
-  return { ...result, ...extras };
+  const full = { ...result, ...extras };
+  requireFiniteResult(full, 'result');
+  return full;
+}
+
+/**
+ * Inside the input limits every number is finite; this guard makes sure no NaN or infinity
+ * can ever reach a caller (JSON would print it as null, silently) even if that reasoning fails.
+ */
+function requireFiniteResult(value: object, path: string): void {
+  // Paths are only built for the error: this runs on every result.
+  const values = value as Record<string, unknown>;
+  for (const key in values) {
+    const v = values[key];
+    if (typeof v === 'number') {
+      if (v - v !== 0) throw new PhysicsSolveError(`${path}.${key} came out as ${v}; no result is given rather than a wrong one (please report the case)`);
+    } else if (v !== null && typeof v === 'object') {
+      requireFiniteResult(v, `${path}.${key}`);
+    }
+  }
 }
 
 function closedFormFor(c: ResolvedCase) {
@@ -213,8 +270,11 @@ function closedFormFor(c: ResolvedCase) {
 }
 
 /**
- * Right-hand side over (x, y, v_x, v_y), per unit inertial mass, with the work done by drag as a
- * fifth component when the energy is audited (left out otherwise: it costs a fifth of the time).
+ * Right-hand side over (x, y, u_x, u_y), per unit inertial mass, in the frame of velocities
+ * relative to the medium: u = v − (w, 0). Near terminal velocity u is small beside a strong
+ * wind, and in this frame its tolerance can follow the terminal speed instead of the wind.
+ * The work done by drag is a fifth component when the energy is audited (left out otherwise:
+ * it costs a fifth of the time).
  */
 function rightHandSide(layer: ResolvedLayer, audit: boolean): (t: number, s: number[]) => number[] {
   const M = layer.inertial_mass_kg;
@@ -224,63 +284,132 @@ function rightHandSide(layer: ResolvedLayer, audit: boolean): (t: number, s: num
   const w = layer.flow_m_s;
   if (audit) {
     return (_t, s) => {
-      const ux = s[2] - w;
+      const ux = s[2];
       const uy = s[3];
       const d = b + k * Math.sqrt(ux * ux + uy * uy);
       const ax = -d * ux;
       const ay = -d * uy;
-      return [s[2], s[3], ax, ay - g, M * (ax * s[2] + ay * s[3])];
+      return [ux + w, uy, ax, ay - g, M * (ax * (ux + w) + ay * uy)];
     };
   }
   return (_t, s) => {
-    const ux = s[2] - w;
+    const ux = s[2];
     const uy = s[3];
     const d = b + k * Math.sqrt(ux * ux + uy * uy);
-    return [s[2], s[3], -d * ux, -d * uy - g];
+    return [ux + w, uy, -d * ux, -d * uy - g];
   };
 }
 
-function runLayer(layer: ResolvedLayer, t0: number, s0: number[], trackApex: boolean, c: ResolvedCase, opts: ValidOptions): LayerRun {
+const toRelative = (layer: ResolvedLayer, s: readonly number[]) => [s[0], s[1], s[2] - layer.flow_m_s, s[3], s[4]];
+const toGround = (layer: ResolvedLayer, s: readonly number[]) => [s[0], s[1], s[2] + layer.flow_m_s, s[3], s[4]];
+
+/**
+ * Height an upward throw gains against net gravity G and drag β·u + κ·u². Each drag term alone
+ * gives a closed form (quadratic: ln(1 + κv₀²/G)/2κ; linear: v₀/β − (G/β²)·ln(1 + βv₀/G)), and
+ * with both the rise is below either, so the smallest is a true scale within a small factor.
+ * The vacuum apex v₀²/2G alone can exceed the real rise 1e8 times for a near-neutral object.
+ */
+export function riseScale(v0: number, G: number, beta: number, kappa: number): number {
+  if (v0 <= 0) return 0;
+  let rise = (v0 * v0) / (2 * G);
+  if (kappa > 0) rise = Math.min(rise, Math.log1p((kappa * v0 * v0) / G) / (2 * kappa));
+  // Below βv₀/G ≈ 1e-3 the linear form cancels and the vacuum value is within 0.1 % of it.
+  if (beta > 0 && (beta * v0) / G > 1e-3) rise = Math.min(rise, v0 / beta - (G / (beta * beta)) * Math.log1p((beta * v0) / G));
+  return rise;
+}
+
+/**
+ * The absolute speed tolerance is at most this many terminal speeds (times the tolerance): the
+ * integrator then settles within about 1e-7·v_t of terminal velocity at the default 1e-10,
+ * far inside the steady fraction, while a fall that enters a layer far above its terminal
+ * speed (air into water) is not held to digits it does not need. 1 costs about 15 % more on
+ * such falls for no gain in verified accuracy; 100 lets near-neutral throws drift to 3e-7.
+ */
+const TERMINAL_SPEED_SCALE = 10;
+
+/** Length, speed and time scales of one layer's motion, from which tolerances and steps follow. */
+export interface LayerScales {
+  readonly length_m: number;
+  readonly speed_m_s: number;
+  /** The shortest time scale of the case; the first step is a quarter of it. */
+  readonly time_s: number;
+  readonly horizon_s: number;
+}
+
+export function layerScales(layer: ResolvedLayer, s0: readonly number[]): LayerScales {
+  const M = layer.inertial_mass_kg;
+  const G = layer.net_weight_n / M;
+  const beta = layer.drag.linear_kg_s / M;
+  const kappa = layer.drag.quadratic_kg_m / M;
+  const vt = layer.terminal_speed_m_s;
+  const hasVt = Number.isFinite(vt) && vt > 0;
+  const thickness = s0[1] - layer.bottom_m;
+  const [ux0, vy0] = [s0[2] - layer.flow_m_s, s0[3]];
+  const u0 = Math.hypot(ux0, vy0);
+  // The vacuum speed after falling the layer: an upper bound on the speed gained in it.
+  const fallSpeed = Math.sqrt(vy0 * vy0 + 2 * G * thickness);
+  const rise = riseScale(vy0, G, beta, kappa);
+  const free = (Math.max(vy0, 0) + fallSpeed) / G;
+  const times = [
+    free,
+    // Relaxation to terminal velocity, by either drag term.
+    hasVt ? vt / G : Infinity,
+    beta > 0 ? 1 / beta : Infinity,
+    // Quadratic drag halves an initial relative speed u₀ in 1/(κ·u₀).
+    kappa > 0 && u0 > 0 ? 1 / (kappa * u0) : Infinity,
+    // Crossing a thin layer at the release speed.
+    thickness > 0 && vy0 !== 0 ? thickness / Math.abs(vy0) : Infinity,
+  ];
+  return {
+    length_m: Math.max(thickness, rise, Number.MIN_VALUE),
+    // Speeds relative to the medium end at terminal speed; while they are larger the relative
+    // tolerance governs, so the absolute one can follow v_t even in a strong wind.
+    speed_m_s: Math.max(Math.min(hasVt ? TERMINAL_SPEED_SCALE * vt : Infinity, Math.max(fallSpeed, u0)), Number.MIN_VALUE),
+    time_s: Math.min(...times),
+    // A generous horizon: the real end is the bottom event.
+    horizon_s: 10 * ((Math.max(vy0, 0) * 2) / G + fallSpeed / G + (hasVt ? thickness / vt + vt / G : 0)) + 1,
+  };
+}
+
+/**
+ * Relative distance from terminal velocity at which the rest of a layer is solved analytically:
+ * √rtol, so the tail's second-order error (≈ θ², see terminalTail) matches the tolerance, but
+ * at least 1e4·rtol so the integrator, which hovers within some hundred tolerances of a stiff
+ * fixed point, always gets there. Capped so a loose tolerance still gives a linear tail.
+ */
+export function steadyFraction(rtol: number): number {
+  return Math.min(1e-2, Math.max(Math.sqrt(rtol), 1e4 * rtol));
+}
+
+function runLayer(layer: ResolvedLayer, t0: number, s0: number[], trackApex: boolean, opts: ValidOptions): LayerRun {
   const bottom = layer.bottom_m;
   if (s0[1] <= bottom && s0[3] <= 0) {
-    return { layer, t0, s0, t1: t0, s1: s0.slice(), apex: null, request: null, options: null, steadyFrom: null };
+    return { layer, t0, s0, t1: t0, s1: s0.slice(), apex: null, request: null, options: null, steadyFrom: null, tail: null };
   }
   const M = layer.inertial_mass_kg;
   const G = layer.net_weight_n / M;
   const vt = layer.terminal_speed_m_s;
-  const thickness = s0[1] - bottom;
-  const [vx0, vy0] = [s0[2], s0[3]];
-  const fallSpeed = Math.sqrt(vy0 * vy0 + 2 * G * thickness);
-  const vScale = Math.max(Math.abs(vx0), Math.abs(vy0), Math.abs(layer.flow_m_s), Math.min(vt, fallSpeed), 1e-12);
-  const rtol = opts.integrator.relativeTolerance;
+  const scales = layerScales(layer, s0);
   const atolScalar = opts.integrator.absoluteTolerance as number;
-  const lScale = Math.max(thickness, (vy0 > 0 ? vy0 * vy0 : 0) / (2 * G), 1e-9);
-  // Absolute tolerances follow the scales of the case so that a 20 µm particle and a 10 km fall
-  // are both solved to the same relative accuracy.
   const audit = opts.energyAudit;
-  const atol = [atolScalar * lScale, atolScalar * lScale, atolScalar * vScale, atolScalar * vScale];
-  if (audit) atol.push(atolScalar * M * (vScale * vScale + G * lScale));
+  const atol = [atolScalar * scales.length_m, atolScalar * scales.length_m, atolScalar * scales.speed_m_s, atolScalar * scales.speed_m_s];
+  if (audit) atol.push(atolScalar * M * (scales.speed_m_s ** 2 + G * scales.length_m));
   const events: OdeEvent[] = [{ component: 1, level: bottom, direction: -1, terminal: true }];
   if (trackApex) events.push({ component: 3, level: 0, direction: -1, terminal: false });
-  // A generous horizon: the real end is the bottom event.
-  const tHorizon = 10 * ((Math.max(vy0, 0) * 2) / G + fallSpeed / G + (Number.isFinite(vt) && vt > 0 ? thickness / vt + vt / G : 0)) + 1;
   // Near terminal velocity an explicit method on a stiff case (a particle, a plate in water)
-  // hovers about the fixed point within some hundred tolerances without settling, and would
-  // take millions of steps. Once within STEADY_FRACTION of terminal velocity, the rest of the
-  // layer follows the linearised relaxation exactly (see terminalTail), leaving an error of
-  // order STEADY_FRACTION squared.
-  const steadyTol = STEADY_FRACTION * (Number.isFinite(vt) ? vt : 0);
-  const w = layer.flow_m_s;
-  const relaxTime = Math.min(Number.isFinite(vt) && vt > 0 ? vt / G : Infinity, layer.drag.linear_kg_s > 0 ? M / layer.drag.linear_kg_s : Infinity);
+  // hovers about the fixed point without settling and would take millions of steps; from
+  // within the steady fraction, the rest of the layer follows the linearised relaxation.
+  const steadyTol = steadyFraction(opts.integrator.relativeTolerance) * (Number.isFinite(vt) ? vt : 0);
+  const rel = toRelative(layer, s0);
   const request: IntegrationRequest = {
-    timeScale: (Math.max(vy0, 0) + fallSpeed) / G,
-    initialStep: 0.25 * Math.min((Math.max(vy0, 0) + fallSpeed) / G, relaxTime),
+    timeScale: scales.time_s,
+    initialStep: 0.25 * scales.time_s,
     f: rightHandSide(layer, audit),
     t0,
-    y0: audit ? s0 : s0.slice(0, 4),
-    tEnd: t0 + tHorizon,
+    y0: audit ? rel : rel.slice(0, 4),
+    tEnd: t0 + scales.horizon_s,
     events,
-    stopWhen: Number.isFinite(vt) && vt > 0 ? (_t, y) => Math.abs(y[2] - w) <= steadyTol && Math.abs(y[3] + vt) <= steadyTol : undefined,
+    stopWhen: Number.isFinite(vt) && vt > 0 ? (_t, y) => Math.abs(y[2]) <= steadyTol && Math.abs(y[3] + vt) <= steadyTol : undefined,
   };
   const options = { ...opts.integrator, absoluteTolerance: atol };
   let out;
@@ -288,9 +417,7 @@ function runLayer(layer: ResolvedLayer, t0: number, s0: number[], trackApex: boo
     out = integrate(request, options);
   } catch (e) {
     if (e instanceof IntegrationBudgetError) {
-      throw new PhysicsSolveError(
-        `${layer.medium.label} (layer ${layer.index}): ${e.message}; the case is too stiff or too long for the step budget (raise options.integrator.maxSteps)`,
-      );
+      throw new PhysicsSolveError(`${layer.medium.label} (layer ${layer.index}): ${e.message}; this is a fault of the solver for this case, please report it`);
     }
     throw e;
   }
@@ -298,21 +425,34 @@ function runLayer(layer: ResolvedLayer, t0: number, s0: number[], trackApex: boo
   const apex = apexHit ? apexHit.y[1] : null;
   // Without the audit the drag-work slot is carried unchanged.
   const full = (y: number[]) => (audit ? y : [...y, s0[4]]);
-  if (out.status === 'event') return { layer, t0, s0, t1: out.t, s1: full(out.y), apex, request, options, steadyFrom: null };
+  if (out.status === 'event') return { layer, t0, s0, t1: out.t, s1: toGround(layer, full(out.y)), apex, request, options, steadyFrom: null, tail: null };
   if (out.status === 'stopped') {
     const s = full(out.y);
     const tail = terminalTail(layer, s);
-    return { layer, t0, s0, t1: out.t + tail.dt, s1: tail.state, apex, request, options, steadyFrom: { t: out.t, s } };
+    return { layer, t0, s0, t1: out.t + tail.dt, s1: toGround(layer, tail.state), apex, request, options, steadyFrom: { t: out.t, s }, tail: tailReport(layer, out.t, s) };
   }
-  throw new PhysicsSolveError(`${layer.medium.label} (layer ${layer.index}): the object did not reach the bottom of the layer within ${tHorizon.toPrecision(3)} s`);
+  throw new PhysicsSolveError(`${layer.medium.label} (layer ${layer.index}): the object did not reach the bottom of the layer within ${scales.horizon_s.toPrecision(3)} s`);
 }
 
-/** Relative distance from terminal velocity at which the remaining fall is solved analytically. */
-const STEADY_FRACTION = 1e-6;
+/**
+ * Bound on the tail's error. With δ the deviation from terminal velocity, the equations are
+ * δ' = J·δ + r(δ), |r| ≤ 2κ|δ|² (the second derivatives of κ|u|·u are at most about 4κ), and
+ * the linear part decays at least as fast as e^(−t/τ_x). The neglected r then moves the object
+ * by at most κ·|δ₀|²·τ_x² in all, which at the terminal speed is a time of κ|δ₀|²τ_x²/v_t;
+ * twice that is reported. Linear drag has r = 0 and an exact tail.
+ */
+function tailReport(layer: ResolvedLayer, t: number, s: number[]): TailReport {
+  const M = layer.inertial_mass_kg;
+  const vt = layer.terminal_speed_m_s;
+  const kappa = layer.drag.quadratic_kg_m / M;
+  const tauX = M / (layer.drag.linear_kg_s + layer.drag.quadratic_kg_m * vt);
+  const d2 = s[2] * s[2] + (s[3] + vt) ** 2;
+  return { from_time_s: t, deviation: Math.sqrt(d2) / vt, time_error_bound_s: (2 * kappa * d2 * tauX * tauX) / vt };
+}
 
 /**
- * Motion from a state within STEADY_FRACTION of terminal velocity, to the bottom of the layer
- * or for a given time. Linearised about terminal velocity, the deviations relax exponentially:
+ * Motion from a state (relative frame) near terminal velocity, to the bottom of the layer or
+ * for a given time. Linearised about terminal velocity, the deviations relax exponentially:
  * vertically with time constant M/(b + 2c·v_t), horizontally with M/(b + c·v_t). The drag work
  * of the tail follows from the energy balance of this tail motion.
  */
@@ -325,7 +465,7 @@ function terminalTail(layer: ResolvedLayer, s: number[], dtGiven?: number): { dt
   const tauY = M / (b + 2 * c * vt);
   const tauX = M / (b + c * vt);
   const dy = s[3] + vt;
-  const dx = s[2] - w;
+  const dx = s[2];
   const fallen = (dt: number) => vt * dt + dy * tauY * Math.expm1(-dt / tauY);
   let dt = dtGiven ?? 0;
   if (dtGiven === undefined) {
@@ -333,28 +473,42 @@ function terminalTail(layer: ResolvedLayer, s: number[], dtGiven?: number): { dt
     dt = (distance + dy * tauY) / vt;
     for (let i = 0; i < 4; i++) dt -= (fallen(dt) - distance) / (vt - dy * Math.exp(-dt / tauY));
   }
-  const vx = w + dx * Math.exp(-dt / tauX);
+  const ux = dx * Math.exp(-dt / tauX);
   const vy = -vt + dy * Math.exp(-dt / tauY);
   const drop = fallen(dt);
-  const kinetic = 0.5 * M * (vx * vx + vy * vy - s[2] * s[2] - s[3] * s[3]);
+  const kinetic = 0.5 * M * ((ux + w) ** 2 + vy * vy - (s[2] + w) ** 2 - s[3] * s[3]);
   return {
     dt,
     state: [
       s[0] + w * dt - dx * tauX * Math.expm1(-dt / tauX),
       dtGiven === undefined ? layer.bottom_m : s[1] - drop,
-      vx,
+      ux,
       vy,
       s[4] + kinetic - layer.net_weight_n * drop,
     ],
   };
 }
 
+function arrival(layer: ResolvedLayer, m: number, t: number, vx: number, vy: number): SurfaceArrival {
+  const v2 = vx * vx + vy * vy;
+  return {
+    layer_index: layer.index,
+    time_s: t,
+    speed_m_s: Math.sqrt(v2),
+    velocity_m_s: [vx, vy],
+    kinetic_energy_j: 0.5 * m * v2,
+    effective_energy_j: 0.5 * (m + layer.added_mass_kg) * v2,
+  };
+}
+
 function layerReports(c: ResolvedCase, runs: LayerRun[]): LayerReport[] {
+  const m = c.object.mass_kg;
   return c.layers.map((layer, i) => {
     const run = runs[i];
     // The layer after the last one run is where the object arrived and floats.
-    const arrival = !run && i === runs.length ? (runs.length > 0 ? { t: runs[i - 1].t1, s: runs[i - 1].s1 } : { t: 0, s: [0, 0, ...c.release_velocity] }) : null;
-    const entry = run ? { t: run.t0, s: run.s0 } : arrival;
+    const floatsHere = !run && i === runs.length ? (runs.length > 0 ? { t: runs[i - 1].t1, s: runs[i - 1].s1 } : { t: 0, s: [0, 0, ...c.release_velocity] }) : null;
+    const entry = run ? { t: run.t0, s: run.s0 } : floatsHere;
+    const at = entry ? arrival(layer, m, entry.t, entry.s[2], entry.s[3]) : null;
     return {
       index: layer.index,
       medium: layer.medium.label,
@@ -362,11 +516,31 @@ function layerReports(c: ResolvedCase, runs: LayerRun[]): LayerReport[] {
       top_m: layer.top_m,
       bottom_m: layer.bottom_m,
       terminal_speed_m_s: Number.isFinite(layer.terminal_speed_m_s) && layer.net_weight_n > 0 ? layer.terminal_speed_m_s : null,
-      entry_time_s: entry ? entry.t : null,
-      entry_speed_m_s: entry ? Math.hypot(entry.s[2], entry.s[3]) : null,
+      entry_time_s: at ? at.time_s : null,
+      entry_speed_m_s: at ? at.speed_m_s : null,
+      entry_velocity_m_s: at ? at.velocity_m_s : null,
+      entry_kinetic_energy_j: at ? at.kinetic_energy_j : null,
+      entry_effective_energy_j: at ? at.effective_energy_j : null,
       exit_time_s: run ? run.t1 : null,
+      analytic_tail: run ? run.tail : null,
     };
   });
+}
+
+function waterEntry(c: ResolvedCase, layers: LayerReport[]): SurfaceArrival | null {
+  for (let i = 1; i < layers.length; i++) {
+    const l = layers[i];
+    if (l.phase !== 'liquid' || layers[i - 1].phase !== 'gas' || l.entry_time_s === null) continue;
+    return {
+      layer_index: l.index,
+      time_s: l.entry_time_s,
+      speed_m_s: l.entry_speed_m_s!,
+      velocity_m_s: l.entry_velocity_m_s!,
+      kinetic_energy_j: l.entry_kinetic_energy_j!,
+      effective_energy_j: l.entry_effective_energy_j!,
+    };
+  }
+  return null;
 }
 
 function energyAudit(c: ResolvedCase, runs: LayerRun[]): EnergyAudit {
@@ -410,7 +584,7 @@ function sampleRuns(runs: LayerRun[], tEnd: number, sEnd: number[], count: numbe
         onStep: (_tOld, t, dense) => {
           while (k < times.length && times[k] <= Math.min(t, odeEnd)) {
             const tk = times[k];
-            push(tk, dense(0, tk), dense(1, tk), dense(2, tk), dense(3, tk));
+            push(tk, dense(0, tk), dense(1, tk), dense(2, tk) + run.layer.flow_m_s, dense(3, tk));
             k++;
           }
         },
@@ -420,7 +594,7 @@ function sampleRuns(runs: LayerRun[], tEnd: number, sEnd: number[], count: numbe
     if (run.steadyFrom) {
       const { t: ts, s } = run.steadyFrom;
       while (k < times.length && times[k] <= run.t1) {
-        const p = terminalTail(run.layer, s, times[k] - ts).state;
+        const p = toGround(run.layer, terminalTail(run.layer, s, times[k] - ts).state);
         push(times[k], p[0], p[1], p[2], p[3]);
         k++;
       }
@@ -444,6 +618,7 @@ function warningsFor(
   floatsIn: ResolvedLayer | null,
   regime: ReynoldsRegime,
   deviation: number | null,
+  fallTime: number,
 ): string[] {
   const w: string[] = [];
   const o = c.object;
@@ -482,8 +657,12 @@ function warningsFor(
   }
   const mismatch = regimeMismatch(c.drag_model, regime);
   if (mismatch) w.push(mismatch);
-  if (deviation !== null && deviation > 1e-6) {
-    w.push(`The integration deviates from the closed-form solution by ${deviation.toExponential(2)} (limit 1e-6): do not rely on this result.`);
+  const tailError = runs.reduce((sum, r) => sum + (r.tail ? r.tail.time_error_bound_s : 0), 0);
+  if (tailError > VERIFICATION_THRESHOLD * fallTime) {
+    w.push(`The analytic terminal tail may add up to ${tailError.toExponential(2)} s to the fall time (more than ${VERIFICATION_THRESHOLD.toExponential(0)} of it): tighten the integration tolerance.`);
+  }
+  if (deviation !== null && deviation > VERIFICATION_THRESHOLD) {
+    w.push(`The integration deviates from the closed-form solution by ${deviation.toExponential(2)} (limit ${VERIFICATION_THRESHOLD.toExponential(0)}): do not rely on this result.`);
   }
   return w;
 }

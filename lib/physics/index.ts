@@ -6,4 +6,5 @@ export { DRAG_MODELS, isDragModel, dragCoefficients, terminalSpeed, dragForce, t
 export { closedFormFall, vacuumFall, linearFall, quadraticFall, linearQuadraticFall, type ClosedFormFall, type ClosedFormParams } from './closed-forms';
 export { resolveDropCase, type DropCase, type ObjectSpec, type LayerSpec, type ResolvedCase } from './case';
 export { reynoldsRegime, type ReynoldsRegime, type Verification } from './classification';
-export { simulateDrop, type SimulateOptions, type DropResult, type DropSamples, type LayerReport, type EnergyAudit } from './fall';
+export { simulateDrop, type SimulateOptions, type DropResult, type DropSamples, type LayerReport, type EnergyAudit, type SurfaceArrival, type TailReport } from './fall';
+export { INPUT_LIMITS, type InputLimit } from './limits';

@@ -76,8 +76,8 @@ export interface IntegrationResult {
 }
 
 export class IntegrationBudgetError extends Error {
-  constructor(steps: number) {
-    super(`the integration did not finish within ${steps} steps`);
+  constructor(steps: number, what = 'steps') {
+    super(`the integration did not finish within ${steps} ${what}`);
     this.name = 'IntegrationBudgetError';
   }
 }
@@ -95,16 +95,68 @@ export function validateIntegratorOptions(options: IntegratorOptions, field = 'o
   };
 }
 
+/** A step that overflowed is retried from the last good state with this fraction of its size. */
+const RETRY_SHRINK = 0.125;
+const MAX_RETRIES = 40;
+
+/**
+ * odex accepts a step whose error estimate is NaN (both `err <= 1` and `err > 1` are false).
+ * Its estimate is NaN only when the extrapolation table holds a NaN or an infinity, and the
+ * accepted state is the first row of that table, so a non-finite state is the sign of such a
+ * step. The wrapper then restarts odex from the last good state with a smaller first step.
+ */
 export function integrate(request: IntegrationRequest, options: Required<IntegratorOptions>): IntegrationResult {
   const n = request.y0.length;
+  const T = request.timeScale ?? 1;
+  const hits: EventHit[] = [];
+  let tStart = request.t0;
+  let yStart = request.y0.slice();
+  let step = request.initialStep;
+  let steps = 0;
+  for (let attempt = 0; attempt <= MAX_RETRIES; attempt++) {
+    const leg = solveLeg(request, options, T, tStart, yStart, step, hits, options.maxSteps - steps);
+    steps += leg.steps;
+    if (leg.status !== 'overflow') return { status: leg.status, t: leg.t, y: leg.y, hits, steps };
+    tStart = leg.t;
+    yStart = leg.y;
+    step = RETRY_SHRINK * leg.failedStep;
+    if (!(step > 0) || steps >= options.maxSteps) break;
+  }
+  throw new IntegrationBudgetError(steps, 'steps that kept overflowing to a non-finite state');
+}
+
+interface Leg {
+  readonly status: IntegrationResult['status'] | 'overflow';
+  readonly t: number;
+  readonly y: number[];
+  readonly steps: number;
+  /** For an overflow: the size of the step that left a non-finite state. */
+  readonly failedStep: number;
+}
+
+function allFinite(y: readonly number[]): boolean {
+  for (let i = 0; i < y.length; i++) if (!Number.isFinite(y[i])) return false;
+  return true;
+}
+
+/** One odex run from (t0, y0); stops at a terminal event, at stopWhen, or at a non-finite step. */
+function solveLeg(
+  request: IntegrationRequest,
+  options: Required<IntegratorOptions>,
+  T: number,
+  t0: number,
+  y0: number[],
+  initialStep: number | undefined,
+  hits: EventHit[],
+  budget: number,
+): Leg {
+  const n = y0.length;
   const solver = new Solver(n);
   solver.relativeTolerance = options.relativeTolerance;
   solver.absoluteTolerance = typeof options.absoluteTolerance === 'number' ? options.absoluteTolerance : [...options.absoluteTolerance];
-  solver.maxSteps = options.maxSteps;
+  solver.maxSteps = Math.max(budget, 1);
   solver.denseOutput = true;
-  const T = request.timeScale ?? 1;
-  const t0 = request.t0;
-  if (request.initialStep !== undefined) solver.initialStepSize = request.initialStep / T;
+  if (initialStep !== undefined) solver.initialStepSize = initialStep / T;
   const f = T === 1 ? request.f : (tau: number, y: number[]) => {
     const d = request.f(t0 + T * tau, y);
     for (let i = 0; i < d.length; i++) d[i] *= T;
@@ -112,17 +164,25 @@ export function integrate(request: IntegrationRequest, options: Required<Integra
   };
 
   const events = request.events;
-  const previous = request.y0.slice();
-  const hits: EventHit[] = [];
-  let status: IntegrationResult['status'] = 'end';
-  let tFinal = request.t0;
-  let yFinal = request.y0.slice();
+  const previous = y0.slice();
+  let tPrevious = t0;
+  let status: Leg['status'] = 'end';
+  let tFinal = t0;
+  let yFinal = y0.slice();
+  let failedStep = 0;
   let steps = 0;
 
-  const result = solver.solve(f, 0, request.y0.slice(), (request.tEnd - t0) / T, (_nr, tauOld, tau, y, denseTau) => {
+  const result = solver.solve(f, 0, y0.slice(), (request.tEnd - t0) / T, (_nr, tauOld, tau, y, denseTau) => {
     if (!denseTau) return;
     const tOld = t0 + T * tauOld;
     const t = t0 + T * tau;
+    if (!allFinite(y)) {
+      status = 'overflow';
+      tFinal = tPrevious;
+      yFinal = previous.slice();
+      failedStep = t - tOld;
+      return false;
+    }
     const dense = (component: number, time: number) => denseTau(component, (time - t0) / T);
     steps++;
     let firstTerminal: EventHit | null = null;
@@ -170,6 +230,7 @@ export function integrate(request: IntegrationRequest, options: Required<Integra
       return false;
     }
     for (let i = 0; i < n; i++) previous[i] = y[i];
+    tPrevious = t;
     if (request.stopWhen && request.stopWhen(t, y)) {
       status = 'stopped';
       tFinal = t;
@@ -180,8 +241,9 @@ export function integrate(request: IntegrationRequest, options: Required<Integra
   });
   if (result.outcome === 1) throw new IntegrationBudgetError(options.maxSteps);
   if (status === 'end') {
+    if (!allFinite(result.y)) return { status: 'overflow', t: tPrevious, y: previous.slice(), steps, failedStep: request.tEnd - tPrevious };
     tFinal = request.tEnd;
     yFinal = result.y;
   }
-  return { status, t: tFinal, y: yFinal, hits, steps };
+  return { status, t: tFinal, y: yFinal, steps, failedStep };
 }

@@ -1,5 +1,6 @@
 import { ZERO_CELSIUS_K } from './constants';
 import { PhysicsInputError, requireFinite, requirePositive } from './errors';
+import { requireWithin } from './limits';
 
 export type Phase = 'gas' | 'liquid';
 
@@ -109,8 +110,8 @@ export function customMedium(
   spec: { density_kg_m3: number; viscosity_pa_s?: number; phase?: Phase },
   field = 'medium',
 ): Medium {
-  const density = requirePositive(`${field}.density_kg_m3`, spec.density_kg_m3);
-  const viscosity = spec.viscosity_pa_s === undefined ? null : requirePositive(`${field}.viscosity_pa_s`, spec.viscosity_pa_s);
+  const density = requireWithin(`${field}.density_kg_m3`, requirePositive(`${field}.density_kg_m3`, spec.density_kg_m3), 'density_kg_m3');
+  const viscosity = spec.viscosity_pa_s === undefined ? null : requireWithin(`${field}.viscosity_pa_s`, requirePositive(`${field}.viscosity_pa_s`, spec.viscosity_pa_s), 'viscosity_pa_s');
   if (spec.phase !== undefined && spec.phase !== 'gas' && spec.phase !== 'liquid') {
     throw new PhysicsInputError(`${field}.phase`, `must be "gas" or "liquid"`);
   }

@@ -172,8 +172,9 @@ export function dp45FallUnchecked(p: FastFallParams, o: ValidFastFallOptions): F
     const scvx = atolV + rtol * Math.max(Math.abs(s[2]), Math.abs(n[2]));
     const scvy = atolV + rtol * Math.max(Math.abs(s[3]), Math.abs(n[3]));
     const err = Math.sqrt(((n[6] / scx) ** 2 + (n[7] / scy) ** 2 + (n[8] / scvx) ** 2 + (n[9] / scvy) ** 2) / 4);
-    if (err > 1) {
-      h *= Math.max(0.2, 0.9 * Math.pow(err, -0.2));
+    // Written so a NaN estimate (an overflowing trial step) is a rejection, not an acceptance.
+    if (!(err <= 1)) {
+      h *= err > 1 ? Math.max(0.2, 0.9 * Math.pow(err, -0.2)) : 0.2;
       rejectedLast = true;
       continue;
     }

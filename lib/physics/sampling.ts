@@ -39,7 +39,8 @@ export interface DropZoneStatistics {
 export const MAX_CASES = 1_000_000;
 
 /**
- * The drop-zone case the benchmark times and the tests check (p95 ≈ 8.3925 m, p99 ≈ 9.4521 m at tight tolerance):
+ * The drop-zone case the benchmark times and the tests check against SciPy (p95 8.3925 m, p99 9.4521 m; see
+ * scripts/reference/drop_zone.py and its fixture):
  * m 2 kg, A 0.01 m², ρ 1.225 kg/m³, h 50 m, C_d uniform in [0.8, 1.3], wind uniform in [0, 15] m/s, horizontal
  * release speed uniform in [0, 2] m/s, 10,000 cases.
  */

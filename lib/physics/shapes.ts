@@ -1,4 +1,5 @@
 import { PhysicsInputError, requirePositive } from './errors';
+import { requireWithin } from './limits';
 
 /**
  * Shape catalogue. Each entry turns dimensions into a reference area (projected on the plane
@@ -292,6 +293,6 @@ export function shapeProperties(shape: unknown, dimensions: unknown, massKg: num
     }
   }
   const d: Record<string, number> = {};
-  for (const key of def.dimensions) d[key] = requirePositive(`${field}.dimensions_m.${key}`, given[key]);
+  for (const key of def.dimensions) d[key] = requireWithin(`${field}.dimensions_m.${key}`, requirePositive(`${field}.dimensions_m.${key}`, given[key]), 'dimension_m');
   return { shape, ...def.evaluate(d, massKg) };
 }

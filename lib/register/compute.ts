@@ -1,31 +1,8 @@
 import { createHash } from 'node:crypto';
 import { MODEL_VERSION, PhysicsInputError, PhysicsSolveError, simulateDrop, type DropCase, type DropResult, type ShapeId } from '@/lib/physics';
-import { classify, type ConsequenceLevel, type StoredResult, type Surface } from '@/lib/domain';
+import { fallHeight, type FallSetting, type ItemPhysics, type LadderBound, type ResultColumns } from '@/db/results';
 
-/** What of an item the fall depends on. */
-export interface ItemPhysics {
-  mass_kg: number;
-  shape: string;
-  dimensions_m: Record<string, number>;
-  cd: number | null;
-  area_m2: number | null;
-  volume_m3: number | null;
-  height_m: number | null;
-}
-
-/** What of its level and site the fall depends on. */
-export interface FallSetting {
-  floor_height_m: number;
-  surface: Surface;
-  water_depth_m: number | null;
-  altitude_m: number;
-  design_wind_m_s: number;
-  current_m_s: number;
-}
-
-export function fallHeight(item: Pick<ItemPhysics, 'height_m'>, setting: Pick<FallSetting, 'floor_height_m'>): number {
-  return item.height_m ?? setting.floor_height_m;
-}
+export { fallHeight, type FallSetting, type ItemPhysics } from '@/db/results';
 
 /**
  * The drop case a register item stands for: released from rest at its height, through ISA air at the site's
@@ -71,9 +48,25 @@ export function inputsHash(dropCase: DropCase): string {
   return createHash('sha256').update(canonical({ model: MODEL_VERSION, case: dropCase })).digest('hex');
 }
 
-export type ComputedResult = Omit<StoredResult, 'computed_at'>;
+/** The level whose bound is the highest at or below the energy; ladders start at 0 J, so there always is one. */
+export function classify(energyJ: number | null, ladder: readonly LadderBound[]): string | null {
+  if (energyJ === null || !Number.isFinite(energyJ)) return null;
+  let found: string | null = null;
+  let bound = -Infinity;
+  for (const level of ladder) {
+    if (level.lower_bound_j <= energyJ && level.lower_bound_j > bound) {
+      found = level.id;
+      bound = level.lower_bound_j;
+    }
+  }
+  return found;
+}
 
-function fromResult(result: DropResult, hash: string, ladder: readonly Pick<ConsequenceLevel, 'id' | 'lower_bound_j'>[]): ComputedResult {
+export type ComputedResult = ResultColumns;
+/** A fall solved for an item in its setting: everything stored but the consequence level, which the ladder gives. */
+export type SolvedFall = Omit<ResultColumns, 'consequence_level_id'>;
+
+function fromResult(result: DropResult, hash: string): SolvedFall {
   return {
     fall_time_s: result.fall_time_s,
     impact_speed_m_s: result.impact_speed_m_s,
@@ -81,7 +74,6 @@ function fromResult(result: DropResult, hash: string, ladder: readonly Pick<Cons
     effective_energy_j: result.effective_impact_energy_j,
     drift_m: Math.abs(result.drift_m),
     sinks: result.sinks,
-    consequence_level_id: classify(result.effective_impact_energy_j, ladder),
     model_version: result.model_version,
     inputs_hash: hash,
     compute_error: null,
@@ -89,15 +81,11 @@ function fromResult(result: DropResult, hash: string, ladder: readonly Pick<Cons
 }
 
 /** An item's fall with the physics core; a case the core refuses is stored as an error, never as a number. */
-export function computeItem(
-  item: ItemPhysics,
-  setting: FallSetting,
-  ladder: readonly Pick<ConsequenceLevel, 'id' | 'lower_bound_j'>[],
-): ComputedResult {
+export function solveItem(item: ItemPhysics, setting: FallSetting): SolvedFall {
   const dropCase = itemDropCase(item, setting);
   const hash = inputsHash(dropCase);
   try {
-    return fromResult(simulateDrop(dropCase), hash, ladder);
+    return fromResult(simulateDrop(dropCase), hash);
   } catch (error) {
     if (!(error instanceof PhysicsInputError) && !(error instanceof PhysicsSolveError)) throw error;
     return {
@@ -107,10 +95,17 @@ export function computeItem(
       effective_energy_j: null,
       drift_m: null,
       sinks: null,
-      consequence_level_id: null,
       model_version: MODEL_VERSION,
       inputs_hash: hash,
       compute_error: error.message,
     };
   }
+}
+
+export function classified(fall: SolvedFall, ladder: readonly LadderBound[]): ComputedResult {
+  return { ...fall, consequence_level_id: classify(fall.effective_energy_j, ladder) };
+}
+
+export function computeItem(item: ItemPhysics, setting: FallSetting, ladder: readonly LadderBound[]): ComputedResult {
+  return classified(solveItem(item, setting), ladder);
 }

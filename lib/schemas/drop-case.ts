@@ -109,9 +109,6 @@ export const dropCaseSchema = baseSchema
     }
   });
 
-/** One case or a list of cases, as the command line accepts them. */
-export const dropCaseBatchSchema = z.union([dropCaseSchema, z.array(dropCaseSchema).min(1).max(10_000)]);
-
 export type DropCaseInput = z.input<typeof baseSchema>;
 
 /** Zod issues as `[{ path: 'object.mass_kg', message: '...' }]`, the project's field-error shape. */

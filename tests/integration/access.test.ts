@@ -22,7 +22,7 @@ import { GET as getLevels, POST as postLevel } from '@/app/api/v1/sites/[id]/lev
 import { GET as getItems, POST as postItem } from '@/app/api/v1/sites/[id]/items/route';
 import { POST as importItemsRoute } from '@/app/api/v1/sites/[id]/items/import/route';
 import { GET as getRegisterCsv } from '@/app/api/v1/sites/[id]/items.csv/route';
-import { createItem } from '@/db/items';
+
 import { createLevel } from '@/db/levels';
 import { createSite } from '@/db/sites';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
@@ -46,10 +46,12 @@ import {
   removeMemberAction,
 } from '@/lib/actions/members';
 import { changePasswordAction, setUnitSystemAction, updateProfileAction } from '@/lib/actions/profile';
-import { startSession } from '@/lib/auth';
+import { sealData } from 'iron-session';
+import { endSession, startSession } from '@/lib/auth';
 import { SESSION_COOKIE } from '@/lib/auth/config';
 import { requestContext } from './harness/context';
 import { createOrg, ctx, jsonRequest, PASSWORD, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
+import { createItem } from '@/lib/register/commands';
 
 type Subject = 'anonymous' | 'admin' | 'engineer' | 'reviewer' | 'viewer' | 'foreign admin';
 const SUBJECTS: Subject[] = ['anonymous', 'admin', 'engineer', 'reviewer', 'viewer', 'foreign admin'];
@@ -58,6 +60,25 @@ let home: OrgFixture;
 let foreign: OrgFixture;
 /** The home organisation's register: a site, a level with one item, and an empty level that may be deleted. */
 let reg: { siteId: string; levelId: string; emptyLevelId: string; itemId: string };
+
+/**
+ * Cookies that must count as no session at all, so every cell expects the anonymous outcome: the admin's cookie copied
+ * before they signed out, and one sealed with a secret that is not the server's.
+ */
+type SignedOutLike = 'revoked admin cookie' | 'forged cookie';
+const SIGNED_OUT_LIKE: SignedOutLike[] = ['revoked admin cookie', 'forged cookie'];
+
+async function actWithCookie(subject: SignedOutLike) {
+  signOutLocally();
+  if (subject === 'forged cookie') {
+    requestContext.cookies.set(SESSION_COOKIE, await sealData({ sid: 'F'.repeat(43) }, { password: 'not-the-server-secret-'.repeat(2) }));
+    return;
+  }
+  await startSession(home.users.admin.id, home.id);
+  const copy = requestContext.cookies.snapshot();
+  await endSession();
+  requestContext.cookies.restore(copy);
+}
 
 async function actAs(subject: Subject) {
   signOutLocally();
@@ -385,12 +406,18 @@ describe('every route, page and action against every role', () => {
         expect(await c.run()).toBe(c.expected[subject]);
       });
     }
+    for (const subject of SIGNED_OUT_LIKE) {
+      it(`${c.name} with a ${subject} → ${c.expected.anonymous}`, async () => {
+        await actWithCookie(subject);
+        expect(await c.run()).toBe(c.expected.anonymous);
+      });
+    }
   }
 });
 
 /**
- * Hostile callers (issue 9). A forged session cookie is a stranger, whatever it claims, so every row answers as it
- * does for the anonymous caller. A write to the API from a page on another site, made with the admin's own cookie,
+ * Hostile callers (issue 9). A malformed session cookie (not even sealed) is a stranger, so every row answers as it
+ * does for the anonymous caller, as for the revoked and forged cookies above. A write to the API from a page on another site, made with the admin's own cookie,
  * is refused with 403 before the role check; a read answers as it does for the admin (the browser, not the server,
  * keeps another site from reading it). Pages and server actions posted from another site are refused by our server
  * before Next runs them: tests/http/actions.test.ts.
@@ -408,7 +435,7 @@ class CrossSiteRequest extends NativeRequest {
 
 describe('every route, page and action against hostile callers', () => {
   for (const c of CASES) {
-    it(`${c.name} with a forged session cookie → ${c.expected.anonymous}`, async () => {
+    it(`${c.name} with a malformed session cookie → ${c.expected.anonymous}`, async () => {
       signOutLocally();
       requestContext.cookies.set(SESSION_COOKIE, `Fe26.2*1*${'Q'.repeat(43)}*${'x'.repeat(40)}*forged`);
       expect(await c.run()).toBe(c.expected.anonymous);

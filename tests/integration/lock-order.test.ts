@@ -5,7 +5,7 @@ import { POST as postLevel } from '@/app/api/v1/sites/[id]/levels/route';
 import { POST as postItem } from '@/app/api/v1/sites/[id]/items/route';
 import { POST as importRoute } from '@/app/api/v1/sites/[id]/items/import/route';
 import { POST as postSite } from '@/app/api/v1/sites/route';
-import { listLadder, replaceLadder } from '@/db/consequence-levels';
+import { listLadder } from '@/db/consequence-levels';
 import { findItem, RESULT_COLUMNS } from '@/db/items';
 import { getDb } from '@/db/knex';
 import { renameOrganisation } from '@/db/organisations';
@@ -14,6 +14,7 @@ import { saveLevelAction } from '@/lib/actions/register';
 import { startSession } from '@/lib/auth';
 import { computeItem } from '@/lib/register/compute';
 import { createOrg, ctx, jsonRequest, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
+import { replaceLadder } from '@/lib/register/commands';
 
 // Every site and item below is invented. The edits race on purpose: if two write paths took row locks in different
 // orders, PostgreSQL would break the cycle by failing one of them with SQLSTATE 40P01, which reaches the caller as a 500.

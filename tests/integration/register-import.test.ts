@@ -2,7 +2,7 @@ import Papa from 'papaparse';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { POST as importRoute } from '@/app/api/v1/sites/[id]/items/import/route';
 import { GET as exportRoute } from '@/app/api/v1/sites/[id]/items.csv/route';
-import { createItem, findItem } from '@/db/items';
+import { findItem } from '@/db/items';
 import { getDb } from '@/db/knex';
 import { createLevel, deleteLevel } from '@/db/levels';
 import { createSite } from '@/db/sites';
@@ -15,6 +15,7 @@ import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';
 import { createOrg, ctx, resetDatabase, signOutLocally, type OrgFixture } from './harness';
+import { createItem } from '@/lib/register/commands';
 
 // Every site, company and item below is invented for these tests.
 

@@ -8,7 +8,7 @@ import { POST as postLevel } from '@/app/api/v1/sites/[id]/levels/route';
 import { POST as postItem } from '@/app/api/v1/sites/[id]/items/route';
 import { POST as importRoute } from '@/app/api/v1/sites/[id]/items/import/route';
 import { listLadder } from '@/db/consequence-levels';
-import { createItem, findItem, RESULT_COLUMNS } from '@/db/items';
+import { findItem, RESULT_COLUMNS } from '@/db/items';
 import { createLevel } from '@/db/levels';
 import { getDb } from '@/db/knex';
 import { createSite } from '@/db/sites';
@@ -22,6 +22,7 @@ import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';
 import { createOrg, ctx, jsonRequest, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
+import { createItem } from '@/lib/register/commands';
 
 // Every site, company and item below is invented for these tests.
 

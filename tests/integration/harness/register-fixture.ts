@@ -1,4 +1,3 @@
-import { createItem } from '@/db/items';
 import { getDb } from '@/db/knex';
 import { createLevel } from '@/db/levels';
 import { createSite } from '@/db/sites';
@@ -6,6 +5,7 @@ import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';
 import type { OrgFixture } from './index';
+import { createItem } from '@/lib/register/commands';
 
 export interface RegisterFixture {
   siteId: string;

@@ -1,7 +1,8 @@
 import { rolesFor } from '@/lib/auth/policy';
-import { listLadder, replaceLadder } from '@/db/consequence-levels';
+import { listLadder } from '@/db/consequence-levels';
 import { apiRoute, readJson } from '@/lib/http/api';
 import { ladderSchema } from '@/lib/validation/consequence-level';
+import { replaceLadder } from '@/lib/register/commands';
 
 export const GET = apiRoute('any', async (_request, { member }) => Response.json({ levels: await listLadder(member.organisationId) }));
 

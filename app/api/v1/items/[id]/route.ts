@@ -1,10 +1,11 @@
 import { rolesFor } from '@/lib/auth/policy';
-import { deleteItem, findItem, updateItem } from '@/db/items';
+import { deleteItem, findItem } from '@/db/items';
 import { NotFoundError } from '@/lib/errors';
 import { apiRoute, readJsonObject } from '@/lib/http/api';
 import { bodyUnits } from '@/lib/register/api';
 import { patchedItem } from '@/lib/register/patch';
 import type { Member } from '@/db/types';
+import { updateItem } from '@/lib/register/commands';
 
 type Params = { id: string };
 

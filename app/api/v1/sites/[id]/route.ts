@@ -1,9 +1,10 @@
 import { rolesFor } from '@/lib/auth/policy';
 import { listLevels } from '@/db/levels';
-import { deleteSite, updateSite } from '@/db/sites';
+import { deleteSite } from '@/db/sites';
 import { apiRoute, readJsonObject } from '@/lib/http/api';
 import { bodyUnits, siteOf } from '@/lib/register/api';
 import { patchedSite } from '@/lib/register/patch';
+import { updateSite } from '@/lib/register/commands';
 
 type Params = { id: string };
 

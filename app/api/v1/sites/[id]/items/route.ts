@@ -1,8 +1,9 @@
 import { rolesFor } from '@/lib/auth/policy';
-import { createItem, findItem, listRegister } from '@/db/items';
+import { findItem, listRegister } from '@/db/items';
 import { apiRoute, readJsonObject } from '@/lib/http/api';
 import { bodyUnits, siteOf } from '@/lib/register/api';
 import { itemSchema } from '@/lib/validation/item';
+import { createItem } from '@/lib/register/commands';
 
 type Params = { id: string };
 

@@ -1,10 +1,11 @@
 import { rolesFor } from '@/lib/auth/policy';
-import { importItems, siteTags } from '@/db/items';
+import { siteTags } from '@/db/items';
 import { listLevels } from '@/db/levels';
 import { apiRoute, badRequest } from '@/lib/http/api';
 import { siteOf } from '@/lib/register/api';
 import { CSV_LIMITS, parseItemsCsv, type CsvProblem } from '@/lib/register/csv';
 import { cleanText } from '@/lib/validation/text';
+import { importItems } from '@/lib/register/commands';
 
 type Params = { id: string };
 const MODES = ['check', 'valid-only', 'all-or-nothing'] as const;
