@@ -5,3 +5,5 @@ export * from './register';
 export * from './shapes';
 export * from './quantity-rules';
 export * from './ids';
+export * from './reference-energies';
+export * from './default-ladder';

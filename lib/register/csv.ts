@@ -1,21 +1,14 @@
 import Papa from 'papaparse';
 import type { z } from 'zod';
-import { DIMENSIONS, SHAPE_LABELS, type UnitSystem } from '@/lib/domain';
+import { CATEGORY_LABELS, DIMENSIONS, ITEM_CATEGORIES, SECURING, SECURING_LABELS, SHAPE_LABELS, type ConsequenceLevel, type UnitSystem } from '@/lib/domain';
 import { dimensionsOf, type ShapeChoice } from '@/lib/shape-choice';
 import { fromSI, type Quantity } from '@/lib/units';
 import { itemSchema, type ItemInput } from '@/lib/validation/item';
 import { isRefusedKey } from '@/lib/validation/input';
 import { writeNumberText } from '@/lib/units/number-text';
 import { quantityField } from '@/lib/validation/quantity';
+import type { RegisterExportRow } from '@/db/types';
 import { escapeCell, unescapeCell } from './csv-cells';
-import {
-  CATEGORY_LABELS,
-  ITEM_CATEGORIES,
-  SECURING,
-  SECURING_LABELS,
-  type ConsequenceLevel,
-  type RegisterRow,
-} from '@/lib/domain';
 
 /**
  * CSV import and export of the register of items at height. Units travel in the header ("mass_lb"), so a file says
@@ -40,16 +33,6 @@ export interface CsvImport {
   preview: { line: number; cells: Record<string, string> }[];
   fatal: boolean;
 }
-
-/** A register line with the item inputs the table does not show, so an export can be re-imported. */
-export type RegisterExportRow = RegisterRow & {
-  dimensions_m: Record<string, number>;
-  cd: number | null;
-  area_m2: number | null;
-  volume_m3: number | null;
-  notes: string;
-  height_override_m: number | null;
-};
 
 const UNIT_SUFFIX: Partial<Record<Quantity, Record<UnitSystem, string>>> = {
   length: { si: 'm', us: 'ft' },

@@ -11,7 +11,7 @@ import { POST as importItemsRoute } from '@/app/api/v1/sites/[id]/items/import/r
 import { listSites } from '@/db/sites';
 import { startSession } from '@/lib/auth';
 import { itemsTemplateCsv } from '@/lib/register/csv';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { requestContext } from './harness/context';
 import { createOrg, ctx, PASSWORD, resetDatabase, signOutLocally, type OrgFixture } from './harness';
 import { createRegister, databaseState, type RegisterFixture } from './harness/register-fixture';
