@@ -15,7 +15,7 @@ export const WRONG_CREDENTIALS = 'That e-mail and password do not match an accou
  * A wrong e-mail or password is answered no sooner than this after the request began, so neither the hash's time
  * nor the database's tells an unknown e-mail from a known one (common practice for sign-in forms).
  */
-export const WRONG_ANSWER_FLOOR_MS = 1000;
+const WRONG_ANSWER_FLOOR_MS = 1000;
 
 export type SignInOutcome =
   | { ok: true; member: Member }
