@@ -28,13 +28,6 @@ export function useFileDrop({ onFiles, accept, disabled }: { onFiles: (files: Fi
     };
   }, []);
 
-  useEffect(() => {
-    if (disabled) {
-      entered.current = [];
-      setDragActive(false);
-    }
-  }, [disabled]);
-
   const open = useCallback(() => {
     const input = inputRef.current;
     if (!input || disabled) return;
@@ -49,7 +42,7 @@ export function useFileDrop({ onFiles, accept, disabled }: { onFiles: (files: Fi
         onDragEnter: (e: DragEvent) => {
           if (!carriesFiles(e)) return;
           e.preventDefault();
-          entered.current = [...entered.current, e.target];
+          entered.current = [...entered.current.filter((t) => rootRef.current?.contains(t as Node)), e.target];
           setDragActive(true);
         },
         onDragOver: (e: DragEvent) => {
@@ -85,5 +78,6 @@ export function useFileDrop({ onFiles, accept, disabled }: { onFiles: (files: Fi
     },
   };
 
-  return { rootRef, rootProps, inputProps, open, isDragActive };
+  // A drag under way when the zone turns busy stops counting: its drop will not be taken.
+  return { rootRef, rootProps, inputProps, open, isDragActive: isDragActive && !disabled };
 }
