@@ -1,3 +1,4 @@
+import 'server-only';
 import type { SessionOptions } from 'iron-session';
 
 export const SESSION_COOKIE = 'plumbline_session';

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { AttemptHistory } from '@/db/sign-in-attempts';
 
 /** Failures per e-mail and address in the window before that pair waits for the window to pass. */

@@ -1,3 +1,4 @@
+import 'server-only';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { firstMembership } from '@/db/memberships';
 import { cancelSignInAttempt, markSignInSucceeded, reserveSignInAttempt } from '@/db/sign-in-attempts';
