@@ -20,6 +20,7 @@ export function useActionForm<TValues extends FieldValues>(
   const [state, formAction, pending] = useActionState(action, idle);
   // react-hook-form writes its defaults into the inputs when it mounts; `ready` tells tests (and styles) when typing is safe.
   const [ready, setReady] = useState(false);
+  // eslint-disable-next-line react-hooks/set-state-in-effect -- the point is one render before mount and one after
   useEffect(() => setReady(true), []);
   const form = useForm<TValues>({
     // The resolver's generics cannot see that the schema's input type is TValues.
