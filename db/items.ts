@@ -1,8 +1,7 @@
-import type { RegisterRow } from '@/lib/register/model';
+import { isUuid, type RegisterRow } from '@/lib/domain';
 import type { RegisterExportRow } from '@/lib/register/csv';
 import type { ItemInput } from '@/lib/validation/item';
 import { ConflictError, NotFoundError } from '@/lib/errors';
-import { isUuid } from '@/lib/validation/ids';
 import { appendAudit } from './audit';
 import { listLadder } from './consequence-levels';
 import { getDb } from './knex';

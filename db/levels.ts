@@ -1,5 +1,5 @@
 import { ConflictError, NotFoundError } from '@/lib/errors';
-import { isUuid } from '@/lib/validation/ids';
+import { isUuid } from '@/lib/domain';
 import type { LevelInput } from '@/lib/validation/level';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';

@@ -1,7 +1,8 @@
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { appendAudit } from './audit';
 import { getDb } from './knex';
-import type { Conn, Member, PublicUser, Role } from './types';
+import type { Role } from '@/lib/domain';
+import type { Conn, Member, PublicUser } from './types';
 import { findUserByEmail, insertUser } from './users';
 
 export interface MemberListing {

@@ -1,5 +1,5 @@
+import { isUuid } from '@/lib/domain';
 import { NotFoundError, ConflictError } from '@/lib/errors';
-import { isUuid } from '@/lib/validation/ids';
 import type { SiteInput } from '@/lib/validation/site';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';

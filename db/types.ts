@@ -1,10 +1,5 @@
 import type { Knex } from 'knex';
-import type { ItemCategory, Securing, SiteKind, StoredResult, Surface } from '@/lib/register/model';
-
-export const ROLES = ['admin', 'engineer', 'reviewer', 'viewer'] as const;
-export type Role = (typeof ROLES)[number];
-export const UNIT_SYSTEMS = ['si', 'us'] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+import type { ItemCategory, Role, Securing, SiteKind, StoredResult, Surface, UnitSystem } from '@/lib/domain';
 
 /** A query runs on the pool or inside a caller's transaction. */
 export type Conn = Knex | Knex.Transaction;

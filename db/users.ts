@@ -1,7 +1,8 @@
 import { ConflictError } from '@/lib/errors';
 import { appendAudit } from './audit';
 import { getDb } from './knex';
-import type { Conn, PublicUser, UnitSystem, UserRow } from './types';
+import type { UnitSystem } from '@/lib/domain';
+import type { Conn, PublicUser, UserRow } from './types';
 
 const PUBLIC_COLUMNS = ['id', 'email', 'display_name', 'unit_system', 'must_change_password', 'created_at', 'updated_at'];
 

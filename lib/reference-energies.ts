@@ -9,7 +9,7 @@ export interface ReferenceEnergy {
   source: string;
 }
 
-export const REFERENCE_ENERGIES: readonly ReferenceEnergy[] = [
+export const REFERENCE_ENERGIES = [
   {
     id: 'debris-14cfr417',
     energy_j: 14.9,
@@ -40,4 +40,13 @@ export const REFERENCE_ENERGIES: readonly ReferenceEnergy[] = [
     label: 'Safety-net drop test (EN 1263-1)',
     source: 'EN 1263-1:2014, dynamic test (100 kg × 9.81 m/s² × 7 m ≈ 6.87 kJ)',
   },
-];
+] as const satisfies readonly ReferenceEnergy[];
+
+export type ReferenceEnergyId = (typeof REFERENCE_ENERGIES)[number]['id'];
+
+/** The energy of one published reference, in joules. */
+export function referenceEnergy(id: ReferenceEnergyId): number {
+  const found = REFERENCE_ENERGIES.find((r) => r.id === id);
+  if (!found) throw new Error(`No reference energy "${id}".`);
+  return found.energy_j;
+}

@@ -2,12 +2,12 @@
 
 import Link from 'next/link';
 import { signInAction } from '@/lib/actions/auth';
-import { signInSchema, type SignInInput } from '@/lib/validation/user';
+import { signInSchema } from '@/lib/validation/user';
 import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
 
 export function SignInForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<SignInInput>(signInSchema, signInAction, {
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(signInSchema, signInAction, {
     email: '',
     password: '',
   });

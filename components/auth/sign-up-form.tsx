@@ -2,12 +2,12 @@
 
 import Link from 'next/link';
 import { signUpAction } from '@/lib/actions/auth';
-import { signUpSchema, type SignUpInput } from '@/lib/validation/user';
+import { signUpSchema } from '@/lib/validation/user';
 import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
 
 export function SignUpForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<SignUpInput>(signUpSchema, signUpAction, {
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(signUpSchema, signUpAction, {
     organisationName: '',
     displayName: '',
     email: '',

@@ -1,7 +1,7 @@
 'use client';
 
 import type { Data } from 'plotly.js';
-import type { UnitSystem } from '@/db/types';
+import type { UnitSystem } from '@/lib/domain';
 import { closedFormSpeedCurve } from '@/lib/calculator/closed-form-curve';
 import type { DropCase, DropResult } from '@/lib/physics';
 import { REFERENCE_ENERGIES } from '@/lib/reference-energies';

@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import type { UnitSystem } from '@/db/types';
+import type { UnitSystem } from '@/lib/domain';
 import type { DropCase, DropResult } from '@/lib/physics';
 import { formatNumber, formatQuantity, unitLabel, fromSI, type Quantity } from '@/lib/units';
 import { SafetyNote } from '@/components/layout/safety-note';

@@ -3,7 +3,8 @@
 import type { ReactNode } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import { TextField } from '@/components/forms/fields';
-import { RULES, type CalculatorValues } from '@/lib/calculator/form';
+import type { CalculatorValues } from '@/lib/calculator/form';
+import { CALCULATOR_RULES } from '@/lib/domain';
 import { unitLabel } from '@/lib/units';
 
 export type CalcForm = UseFormReturn<CalculatorValues>;
@@ -16,11 +17,11 @@ export function CalcNumber({
   hint,
 }: {
   form: CalcForm;
-  name: keyof CalculatorValues & keyof typeof RULES;
+  name: keyof CalculatorValues & keyof typeof CALCULATOR_RULES;
   label?: string;
   hint?: ReactNode;
 }) {
-  const rule = RULES[name];
+  const rule = CALCULATOR_RULES[name];
   const units = form.watch('units');
   const suffix = rule.quantity ? unitLabel(rule.quantity, units) : rule.unitless || undefined;
   const error = form.formState.errors[name]?.message;

@@ -1,12 +1,13 @@
 'use client';
 
+import { DIMENSION_LABELS, SHAPE_LABELS } from '@/lib/domain';
+import { dimensionsOf, SHAPE_CHOICES } from '@/lib/shape-choice';
 import { SelectField } from '@/components/forms/fields';
-import { dimensionsOf, massSI, SHAPE_CHOICES, toDropCase, type CalculatorValues } from '@/lib/calculator/form';
+import { massSI, toDropCase, type CalculatorValues } from '@/lib/calculator/form';
 import { MATERIALS, material } from '@/lib/materials';
 import { resolveDropCase } from '@/lib/physics';
 import { formatQuantity } from '@/lib/units';
 import { CalcNumber, ChoiceRow, Section, type CalcForm } from './field-helpers';
-import { DIMENSION_LABELS, SHAPE_LABELS } from './labels';
 
 const SHAPE_OPTIONS = SHAPE_CHOICES.map((value) => ({ value, label: SHAPE_LABELS[value] }));
 const MATERIAL_OPTIONS = MATERIALS.map((m) => ({ value: m.id, label: `${m.label} (${m.density_kg_m3} kg/m³)` }));

@@ -1,4 +1,4 @@
-import type { UnitSystem } from '@/db/types';
+import type { UnitSystem } from '@/lib/domain';
 import type { DropResult } from '@/lib/physics';
 import { formatQuantity } from '@/lib/units';
 

@@ -1,6 +1,6 @@
 'use client';
 
-import type { UnitSystem } from '@/db/types';
+import type { UnitSystem } from '@/lib/domain';
 
 const OPTIONS: { value: UnitSystem; label: string }[] = [
   { value: 'si', label: 'SI' },

@@ -2,7 +2,7 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { startTransition, useActionState, useEffect, useState } from 'react';
-import { get, useForm, type DefaultValues, type FieldValues, type Path } from 'react-hook-form';
+import { get, useForm, type DefaultValues, type FieldValues, type Path, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { idle, type ActionState } from '@/lib/actions/state';
 
@@ -12,10 +12,10 @@ type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
  * react-hook-form checks the shared zod schema as the user types; the server action checks it again and its
  * field errors show in the same place. Without JavaScript the form still posts to the action.
  */
-export function useActionForm<TValues extends FieldValues>(
-  schema: z.ZodType<unknown, TValues>,
+export function useActionForm<S extends z.ZodType, TValues extends FieldValues & z.input<S>>(
+  schema: S,
   action: Action,
-  defaultValues: DefaultValues<TValues>,
+  defaultValues: TValues,
 ) {
   const [state, formAction, pending] = useActionState(action, idle);
   // react-hook-form writes its defaults into the inputs when it mounts; `ready` tells tests (and styles) when typing is safe.
@@ -23,10 +23,11 @@ export function useActionForm<TValues extends FieldValues>(
   // eslint-disable-next-line react-hooks/set-state-in-effect -- the point is one render before mount and one after
   useEffect(() => setReady(true), []);
   const form = useForm<TValues>({
-    // The resolver's generics cannot see that the schema's input type is TValues.
-    resolver: zodResolver(schema as never) as never,
+    // The schema reads more than the form sends (JSON numbers as well as text), so its input type is wider than
+    // TValues; the resolver's generics ask for them to be equal, which the constraint on TValues stands in for.
+    resolver: zodResolver(schema as never) as unknown as Resolver<TValues>,
     mode: 'onTouched',
-    defaultValues,
+    defaultValues: defaultValues as DefaultValues<TValues>,
   });
 
   const onSubmit = form.handleSubmit((_values, event) => {

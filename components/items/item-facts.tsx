@@ -1,8 +1,6 @@
-import { SHAPE_LABELS } from '@/components/calculator/labels';
+import { CATEGORY_LABELS, SECURING_LABELS, SHAPE_LABELS, type UnitSystem } from '@/lib/domain';
+import type { ShapeChoice } from '@/lib/shape-choice';
 import type { ItemDetail } from '@/db/items';
-import type { UnitSystem } from '@/db/types';
-import type { ShapeChoice } from '@/lib/calculator/form';
-import { CATEGORY_LABELS, SECURING_LABELS } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 
 /** The item's inputs for those who may read but not change them. */

@@ -1,14 +1,12 @@
 'use client';
 
 import { useWatch } from 'react-hook-form';
-import { DIMENSION_LABELS, SHAPE_LABELS } from '@/components/calculator/labels';
+import { CATEGORY_LABELS, DIMENSION_LABELS, ITEM_CATEGORIES, REGISTER_RULES, SECURING, SECURING_LABELS, SHAPE_LABELS, type UnitSystem } from '@/lib/domain';
+import { dimensionsOf, SHAPE_CHOICES, type ShapeChoice } from '@/lib/shape-choice';
 import { FormMessage, SelectField, SubmitButton, TextAreaField, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
-import type { UnitSystem } from '@/db/types';
 import { saveItemAction } from '@/lib/actions/register';
-import { RULES, SHAPE_CHOICES, dimensionsOf, type ShapeChoice } from '@/lib/calculator/form';
 import type { ItemValues } from '@/lib/register/form-values';
-import { CATEGORY_LABELS, ITEM_CATEGORIES, SECURING, SECURING_LABELS } from '@/lib/register/model';
 import { formatQuantity, unitLabel } from '@/lib/units';
 import { itemSchema } from '@/lib/validation/item';
 
@@ -36,7 +34,7 @@ export function ItemForm({
   units: UnitSystem;
   levels: LevelChoice[];
 }) {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<ItemValues>(itemSchema(units) as never, saveItemAction, initial);
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(itemSchema(units), saveItemAction, initial);
   const shape = useWatch({ control: form.control, name: 'shape' }) as ShapeChoice;
   const levelId = useWatch({ control: form.control, name: 'level_id' });
   const direct = shape === 'direct';
@@ -107,7 +105,7 @@ export function ItemForm({
         <div className="mt-3 grid gap-3 sm:grid-cols-3">
           <TextField label="Drag coefficient C_d" inputMode="decimal" hint={direct ? undefined : 'Blank: from the shape'} error={errorFor('cd')} {...form.register('cd')} />
           <TextField
-            label={RULES.area.label}
+            label={REGISTER_RULES.area.label}
             inputMode="decimal"
             suffix={unitLabel('area', units)}
             hint={direct ? undefined : 'Blank: from the shape'}
@@ -115,7 +113,7 @@ export function ItemForm({
             {...form.register('area')}
           />
           <TextField
-            label={RULES.volume.label}
+            label={REGISTER_RULES.volume.label}
             inputMode="decimal"
             suffix={unitLabel('volume', units)}
             hint={direct ? 'Blank: 0, no buoyancy in water' : 'Blank: from the shape'}

@@ -1,6 +1,6 @@
+import type { ConsequenceLevel, UnitSystem } from '@/lib/domain';
 import { ConsequenceBadge } from '@/components/register/consequence-badge';
-import type { ItemRow, UnitSystem } from '@/db/types';
-import type { ConsequenceLevel } from '@/lib/register/model';
+import type { ItemRow } from '@/db/types';
 import { formatQuantity } from '@/lib/units';
 
 function Figure({ label, value, testId }: { label: string; value: string; testId: string }) {

@@ -2,15 +2,14 @@
 
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { useFieldArray, useWatch } from 'react-hook-form';
+import { type ConsequenceLevel, LADDER_COLOUR_IDS, LADDER_COLOURS, type LadderColour, type UnitSystem } from '@/lib/domain';
 import { FormMessage, SelectField, SubmitButton, TextAreaField, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
 import { ladderInOrder } from '@/components/register/ladder';
-import type { UnitSystem } from '@/db/types';
 import { saveLadderAction } from '@/lib/actions/register';
 import type { ActionState } from '@/lib/actions/state';
 import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
 import { writeNumberText } from '@/lib/units/number-text';
-import { LADDER_COLOURS, LADDER_COLOUR_IDS, type ConsequenceLevel, type LadderColour } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 
@@ -57,7 +56,7 @@ const smallButton =
  */
 export function LadderEditor({ ladder, units }: { ladder: ConsequenceLevel[]; units: UnitSystem }) {
   const initial = useMemo<LadderValues>(() => ({ levels: ladderInOrder(ladder).map(toRow) }), [ladder]);
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<LadderValues>(ladderSchema as never, saveLadderAction, initial);
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(ladderSchema, saveLadderAction, initial);
   const { control, register, setValue, getValues, trigger } = form;
   const { fields, append, remove, swap, replace } = useFieldArray({ control, name: 'levels' });
   const values = useWatch({ control, name: 'levels' });

@@ -1,6 +1,5 @@
+import { type ConsequenceLevel, LADDER_COLOURS, type UnitSystem } from '@/lib/domain';
 import { ladderInOrder } from '@/components/register/ladder';
-import type { UnitSystem } from '@/db/types';
-import { LADDER_COLOURS, type ConsequenceLevel } from '@/lib/register/model';
 import { formatNumber, formatQuantity } from '@/lib/units';
 
 /** A bound as the admin typed it in joules (not rounded to three figures), with the user's units beside it. */

@@ -1,15 +1,10 @@
 import Link from 'next/link';
+import { can } from '@/lib/auth/policy';
 import { Wordmark } from '@/components/brand/plumbline-mark';
 import type { Member } from '@/db/types';
+import { ROLE_LABELS } from '@/lib/domain';
 import { signOutAction } from '@/lib/actions/auth';
 import { NavLink } from './nav-link';
-
-export const ROLE_LABELS = {
-  admin: 'Admin',
-  engineer: 'Engineer',
-  reviewer: 'Reviewer',
-  viewer: 'Viewer',
-} as const;
 
 export function AppHeader({ member }: { member: Member }) {
   return (
@@ -23,7 +18,7 @@ export function AppHeader({ member }: { member: Member }) {
           <NavLink href="/calculator">Drop calculator</NavLink>
           <NavLink href="/sites">Sites</NavLink>
           <NavLink href="/consequence-levels">Consequence ladder</NavLink>
-          {member.role === 'admin' ? <NavLink href="/members">Members</NavLink> : null}
+          {can(member, 'members.manage') ? <NavLink href="/members">Members</NavLink> : null}
           <NavLink href="/profile">Profile</NavLink>
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">

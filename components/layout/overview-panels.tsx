@@ -1,5 +1,6 @@
 import Link from 'next/link';
-import type { Role } from '@/db/types';
+import { can } from '@/lib/auth/policy';
+import type { Role } from '@/lib/domain';
 
 interface Panel {
   title: string;
@@ -52,7 +53,7 @@ const ROLE_DUTY: Record<Role, string> = {
 };
 
 export function OverviewPanels({ role }: { role: Role }) {
-  const panels = role === 'admin' ? [...ADMIN, ...COMMON] : COMMON;
+  const panels = can({ role }, 'members.manage') ? [...ADMIN, ...COMMON] : COMMON;
   return (
     <section aria-label="Where to go" className="flex flex-col gap-4">
       <p className="text-sm text-ink-muted">{ROLE_DUTY[role]}</p>

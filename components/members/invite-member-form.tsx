@@ -2,13 +2,13 @@
 
 import { useEffect } from 'react';
 import { inviteMemberAction } from '@/lib/actions/members';
-import { inviteMemberSchema, type InviteMemberInput } from '@/lib/validation/member';
+import { inviteMemberSchema } from '@/lib/validation/member';
 import { FormMessage, SelectField, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
 import { ROLE_OPTIONS } from './role-options';
 
 export function InviteMemberForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<InviteMemberInput>(
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(
     inviteMemberSchema,
     inviteMemberAction,
     { displayName: '', email: '', role: 'viewer' },

@@ -1,7 +1,7 @@
 'use client';
 
 import { useActionState } from 'react';
-import type { Role } from '@/db/types';
+import type { Role } from '@/lib/domain';
 import { changeRoleAction, removeMemberAction } from '@/lib/actions/members';
 import { idle } from '@/lib/actions/state';
 import { ROLE_OPTIONS } from './role-options';

@@ -1,12 +1,12 @@
 'use client';
 
 import { organisationSettingsAction } from '@/lib/actions/members';
-import { organisationSettingsSchema, type OrganisationSettingsInput } from '@/lib/validation/organisation';
+import { organisationSettingsSchema } from '@/lib/validation/organisation';
 import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
 
 export function OrganisationSettingsForm({ name }: { name: string }) {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<OrganisationSettingsInput>(
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(
     organisationSettingsSchema,
     organisationSettingsAction,
     { name },

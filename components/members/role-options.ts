@@ -1,4 +1,3 @@
-import { ROLES } from '@/db/types';
-import { ROLE_LABELS } from '@/components/layout/app-header';
+import { ROLE_LABELS, ROLES } from '@/lib/domain';
 
 export const ROLE_OPTIONS = ROLES.map((value) => ({ value, label: ROLE_LABELS[value] }));

@@ -2,12 +2,12 @@
 
 import { useEffect } from 'react';
 import { changePasswordAction } from '@/lib/actions/profile';
-import { passwordChangeSchema, type PasswordChangeInput } from '@/lib/validation/user';
+import { passwordChangeSchema } from '@/lib/validation/user';
 import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
 
 export function PasswordForm() {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<PasswordChangeInput>(
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(
     passwordChangeSchema,
     changePasswordAction,
     { currentPassword: '', newPassword: '', confirmPassword: '' },

@@ -11,7 +11,7 @@ const UNIT_OPTIONS = [
 ] as const;
 
 export function ProfileForm({ defaults }: { defaults: ProfileInput }) {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<ProfileInput>(
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(
     profileSchema,
     updateProfileAction,
     defaults,

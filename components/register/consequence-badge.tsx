@@ -1,4 +1,4 @@
-import { LADDER_COLOURS, type ConsequenceLevel } from '@/lib/register/model';
+import { type ConsequenceLevel, LADDER_COLOURS } from '@/lib/domain';
 
 /** A consequence level as a colour square and its name; the name is always written, so colour is never the only cue. */
 export function ConsequenceBadge({ level }: { level: ConsequenceLevel | null }) {

@@ -1,8 +1,7 @@
 import type { Annotation, Data, Layout, Shape } from 'plotly.js';
-import type { UnitSystem } from '@/db/types';
+import { type ConsequenceLevel, LADDER_COLOURS, type RegisterViewRow, type SiteLevelRef, type UnitSystem } from '@/lib/domain';
 import { PLOT_COLOURS as C } from '@/components/calculator/plot-colours';
 import { plotText } from '@/lib/plot-text';
-import { LADDER_COLOURS, type ConsequenceLevel, type RegisterViewRow, type SiteLevelRef } from '@/lib/register/model';
 import { formatQuantity, fromSI, unitLabel } from '@/lib/units';
 import { ladderInOrder } from './ladder';
 

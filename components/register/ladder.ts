@@ -1,5 +1,4 @@
-import type { UnitSystem } from '@/db/types';
-import type { ConsequenceLevel } from '@/lib/register/model';
+import type { ConsequenceLevel, UnitSystem } from '@/lib/domain';
 import { formatQuantity } from '@/lib/units';
 
 /** Lowest level first: pages may pass the ladder in any order, but the band and the plot read upwards. */

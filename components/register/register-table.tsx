@@ -9,8 +9,7 @@ import {
   getSortedRowModel,
   useReactTable,
 } from '@tanstack/react-table';
-import type { UnitSystem } from '@/db/types';
-import { SECURING, SECURING_LABELS, type ConsequenceLevel, type RegisterViewRow, type SiteLevelRef } from '@/lib/register/model';
+import { SECURING, SECURING_LABELS, type ConsequenceLevel, type RegisterViewRow, type SiteLevelRef, type UnitSystem } from '@/lib/domain';
 import { buttonStyles } from '@/components/ui/button';
 import { controlStyle, Labelled } from '@/components/ui/labelled';
 import { Pager } from '@/components/ui/pager';

@@ -1,7 +1,6 @@
 import Link from 'next/link';
-import type { UnitSystem } from '@/db/types';
+import { type ConsequenceLevel, LADDER_COLOURS, type RegisterViewRow, type UnitSystem } from '@/lib/domain';
 import { SafetyNote } from '@/components/layout/safety-note';
-import { LADDER_COLOURS, type ConsequenceLevel, type RegisterViewRow } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 import { ConsequenceBadge } from './consequence-badge';
 import { boundLabel, ladderById, ladderInOrder } from './ladder';

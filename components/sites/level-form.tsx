@@ -2,9 +2,9 @@
 
 import { useEffect } from 'react';
 import { useWatch } from 'react-hook-form';
+import type { UnitSystem } from '@/lib/domain';
 import { FormMessage, SelectField, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
-import type { UnitSystem } from '@/db/types';
 import { saveLevelAction } from '@/lib/actions/register';
 import type { LevelValues } from '@/lib/register/form-values';
 import { unitLabel } from '@/lib/units';
@@ -13,7 +13,7 @@ import { SURFACE_OPTIONS } from './options';
 
 /** Adds a level (no id) or edits one; a changed height or surface recomputes the level's items. */
 export function LevelForm({ siteId, id, initial, units, onDone }: { siteId: string; id?: string; initial: LevelValues; units: UnitSystem; onDone?: () => void }) {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<LevelValues>(levelSchema(units) as never, saveLevelAction, initial);
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(levelSchema(units), saveLevelAction, initial);
   const surface = useWatch({ control: form.control, name: 'surface' });
   const { reset } = form;
   useEffect(() => {

@@ -1,11 +1,10 @@
 'use client';
 
 import { useState } from 'react';
+import { type Surface, SURFACE_LABELS, type UnitSystem } from '@/lib/domain';
 import { ConfirmForm } from '@/components/forms/confirm-form';
-import type { UnitSystem } from '@/db/types';
 import { deleteLevelAction } from '@/lib/actions/register';
 import type { LevelValues } from '@/lib/register/form-values';
-import { SURFACE_LABELS, type Surface } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 import { LevelForm } from './level-form';
 

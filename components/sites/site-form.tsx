@@ -1,9 +1,9 @@
 'use client';
 
 import { useWatch } from 'react-hook-form';
+import type { UnitSystem } from '@/lib/domain';
 import { FormMessage, SelectField, SubmitButton, TextAreaField, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
-import type { UnitSystem } from '@/db/types';
 import { saveSiteAction } from '@/lib/actions/register';
 import type { SiteValues } from '@/lib/register/form-values';
 import { unitLabel } from '@/lib/units';
@@ -12,8 +12,8 @@ import { KIND_OPTIONS, SURFACE_OPTIONS } from './options';
 
 /** Creates a site (no id) or edits one; a changed wind, current or altitude recomputes the site's items. */
 export function SiteForm({ id, initial, units }: { id?: string; initial: SiteValues; units: UnitSystem }) {
-  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm<SiteValues>(
-    siteSchema(units) as never,
+  const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(
+    siteSchema(units),
     saveSiteAction,
     initial,
   );

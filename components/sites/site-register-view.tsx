@@ -1,10 +1,10 @@
 'use client';
 
 import { useMemo } from 'react';
+import type { ConsequenceLevel, UnitSystem } from '@/lib/domain';
 import { EnergyByLevelPlot } from '@/components/register/energy-by-level-plot';
 import { RegisterTable } from '@/components/register/register-table';
-import type { UnitSystem } from '@/db/types';
-import { unpackRegister, type ConsequenceLevel, type PackedRegister } from '@/lib/register/model';
+import { unpackRegister, type PackedRegister } from '@/lib/register/model';
 
 /** The plot and the table share one packed copy of the rows: a site of thousands of items crosses the wire once. */
 export function SiteRegisterView({ packed, ladder, units, canEdit }: { packed: PackedRegister; ladder: ConsequenceLevel[]; units: UnitSystem; canEdit: boolean }) {

@@ -1,7 +1,6 @@
 import Link from 'next/link';
-import type { UnitSystem } from '@/db/types';
+import { type ConsequenceLevel, LADDER_COLOURS, SITE_KIND_LABELS, SURFACE_LABELS, type UnitSystem } from '@/lib/domain';
 import type { SiteListing } from '@/db/sites';
-import { LADDER_COLOURS, SITE_KIND_LABELS, SURFACE_LABELS, type ConsequenceLevel } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 
 /** Register lines per consequence level, as a row of small swatches with counts; the name is in the label. */

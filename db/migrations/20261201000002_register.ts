@@ -1,5 +1,47 @@
 import type { Knex } from 'knex';
-import { DEFAULT_LADDER } from '../../lib/register/default-ladder';
+
+const FIRST_LADDER = [
+  {
+    rank: 1,
+    name: 'Under debris threshold',
+    lower_bound_j: 0,
+    colour: 'haze',
+    guidance: 'Good housekeeping and tool tethering where practical; hard hats in the area as site rules require.',
+    source: 'Floor of the ladder: every impact energy has a level.',
+  },
+  {
+    rank: 2,
+    name: 'Injury possible',
+    lower_bound_j: 14.9,
+    colour: 'cord',
+    guidance: 'Tether or contain the item during work; mark the area below and keep through-traffic out while work goes on.',
+    source: '14 CFR Part 417, Appendix C: hazardous-debris threshold, 11 ft·lbf = 14.9 J',
+  },
+  {
+    rank: 3,
+    name: 'Beyond helmet test',
+    lower_bound_j: 49,
+    colour: 'brass',
+    guidance: 'Barricade the drop zone below during work; tether, contain or fit secondary retention; nobody beneath while the item is handled.',
+    source: 'EN 397:2012 shock-absorption test: 5 kg from 1 m, about 49 J',
+  },
+  {
+    rank: 4,
+    name: 'Hazardous fragment',
+    lower_bound_j: 79,
+    colour: 'flare',
+    guidance: 'Hard barricade at the computed radius, permit-controlled access, secondary retention on fixed items and an inspection interval.',
+    source: 'DDESB Technical Paper 12: hazardous-fragment criterion, 58 ft·lbf = 79 J',
+  },
+  {
+    rank: 5,
+    name: 'Beyond net test',
+    lower_bound_j: 6867,
+    colour: 'plum',
+    guidance: 'Eliminate or engineer out: a lift plan, no one in the fall zone, and protection designed for the load, not a net or a helmet.',
+    source: 'EN 1263-1:2014 safety-net dynamic test: 100 kg from 7 m, about 6.87 kJ',
+  },
+];;
 
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('consequence_levels', (t) => {
@@ -15,10 +57,11 @@ export async function up(knex: Knex): Promise<void> {
     t.unique(['organisation_id', 'rank']);
   });
   await knex.raw('ALTER TABLE consequence_levels ADD CONSTRAINT consequence_levels_bound_check CHECK (lower_bound_j >= 0)');
-  // Organisations created before the register existed get the same ladder a new one starts with.
+  // Organisations created before the register existed get the ladder a new one started with when this migration
+  // was written. The values are frozen here: a later change to the live default ladder must not rewrite history.
   const organisations: { id: string }[] = await knex('organisations').select('id');
   for (const { id } of organisations) {
-    await knex('consequence_levels').insert(DEFAULT_LADDER.map((l) => ({ ...l, organisation_id: id })));
+    await knex('consequence_levels').insert(FIRST_LADDER.map((l) => ({ ...l, organisation_id: id })));
   }
 
   await knex.schema.createTable('sites', (t) => {

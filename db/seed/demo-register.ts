@@ -1,8 +1,8 @@
 // The demo company's register: invented sites with the kind of items a survey at height lists, so every page of
 // the register has something to show on first start. Every value passes the same schemas as user input.
-import type { DimensionKey, ShapeChoice } from '@/lib/calculator/form';
+import type { DimensionKey, ItemCategory, Securing } from '@/lib/domain';
+import type { ShapeChoice } from '@/lib/shape-choice';
 import { computeItem } from '@/lib/register/compute';
-import type { ItemCategory, Securing } from '@/lib/register/model';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';

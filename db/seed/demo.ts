@@ -3,7 +3,7 @@ import { hashPassword } from '../../lib/auth/password';
 import { insertDefaultLadder } from '../consequence-levels';
 import { closeDb, getDb } from '../knex';
 import { findOrganisationByName } from '../organisations';
-import type { Role } from '../types';
+import type { Role } from '@/lib/domain';
 import { seedDemoRegister } from './demo-register';
 
 export const DEMO_ORGANISATION = 'Halyard Ness Access & Lifting (demo)';

@@ -1,82 +1,64 @@
 'use server';
 
-import { revalidatePath } from 'next/cache';
 import { addMember, changeRole, removeMember } from '@/db/memberships';
 import { renameOrganisation } from '@/db/organisations';
-import { hashPassword, requireRole, temporaryPassword } from '@/lib/auth';
-import { ConflictError, NotFoundError, UnavailableError } from '@/lib/errors';
-import { parseForm } from '@/lib/validation/input';
-import { toFieldErrors } from '@/lib/validation/issues';
+import { hashPassword, temporaryPassword } from '@/lib/auth';
 import { changeRoleSchema, inviteMemberSchema, removeMemberSchema } from '@/lib/validation/member';
 import { organisationSettingsSchema } from '@/lib/validation/organisation';
-import type { ActionState } from './state';
+import { defineAction } from './define';
 
-function known(error: unknown): ActionState {
-  if (error instanceof ConflictError) return { errors: { [error.field]: error.message }, message: error.message };
-  if (error instanceof NotFoundError) return { message: 'That member is no longer in the organisation.' };
-  // The password hashing pool is full (lib/auth/hash-pool.ts): the message says when to try again.
-  if (error instanceof UnavailableError) return { message: error.message };
-  throw error;
-}
+const GONE = 'That member is no longer in the organisation.';
 
-export async function inviteMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
-  const parsed = parseForm(inviteMemberSchema, form);
-  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
-  const password = temporaryPassword();
-  try {
+export const inviteMemberAction = defineAction({
+  allow: 'members.manage',
+  schema: inviteMemberSchema,
+  notFound: GONE,
+  run: async (invite, { member: admin }) => {
+    const password = temporaryPassword();
     const { createdAccount } = await addMember({
       organisationId: admin.organisationId,
       actorUserId: admin.userId,
-      email: parsed.data.email,
-      displayName: parsed.data.displayName,
-      role: parsed.data.role,
+      email: invite.email,
+      displayName: invite.displayName,
+      role: invite.role,
       temporaryPasswordHash: await hashPassword(password),
     });
-    revalidatePath('/members');
     return createdAccount
       ? {
           ok: true,
-          message: `${parsed.data.displayName} can now sign in as ${parsed.data.email} with this one-time password, then must choose their own.`,
+          message: `${invite.displayName} can now sign in as ${invite.email} with this one-time password, then must choose their own.`,
           secret: password,
+          revalidate: '/members',
         }
-      : { ok: true, message: `${parsed.data.email} already had an account and joins with their own password.` };
-  } catch (error) {
-    return known(error);
-  }
-}
+      : { ok: true, message: `${invite.email} already had an account and joins with their own password.`, revalidate: '/members' };
+  },
+});
 
-export async function changeRoleAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
-  const parsed = parseForm(changeRoleSchema, form);
-  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
-  try {
-    await changeRole({ organisationId: admin.organisationId, actorUserId: admin.userId, ...parsed.data });
-    revalidatePath('/members');
-    return { ok: true, message: 'Role changed.' };
-  } catch (error) {
-    return known(error);
-  }
-}
+export const changeRoleAction = defineAction({
+  allow: 'members.manage',
+  schema: changeRoleSchema,
+  notFound: GONE,
+  run: async (change, { member: admin }) => {
+    await changeRole({ organisationId: admin.organisationId, actorUserId: admin.userId, ...change });
+    return { ok: true, message: 'Role changed.', revalidate: '/members' };
+  },
+});
 
-export async function removeMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
-  const parsed = parseForm(removeMemberSchema, form);
-  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
-  try {
-    await removeMember({ organisationId: admin.organisationId, actorUserId: admin.userId, ...parsed.data });
-    revalidatePath('/members');
-    return { ok: true, message: 'Member removed.' };
-  } catch (error) {
-    return known(error);
-  }
-}
+export const removeMemberAction = defineAction({
+  allow: 'members.manage',
+  schema: removeMemberSchema,
+  notFound: GONE,
+  run: async (removal, { member: admin }) => {
+    await removeMember({ organisationId: admin.organisationId, actorUserId: admin.userId, ...removal });
+    return { ok: true, message: 'Member removed.', revalidate: '/members' };
+  },
+});
 
-export async function organisationSettingsAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const admin = await requireRole(['admin']);
-  const parsed = parseForm(organisationSettingsSchema, form);
-  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
-  await renameOrganisation(admin.organisationId, parsed.data.name, admin.userId);
-  revalidatePath('/', 'layout');
-  return { ok: true, message: 'Organisation renamed.' };
-}
+export const organisationSettingsAction = defineAction({
+  allow: 'members.manage',
+  schema: organisationSettingsSchema,
+  run: async ({ name }, { member: admin }) => {
+    await renameOrganisation(admin.organisationId, name, admin.userId);
+    return { ok: true, message: 'Organisation renamed.', revalidate: ['/', 'layout'] };
+  },
+});

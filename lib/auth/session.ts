@@ -4,9 +4,10 @@ import { getIronSession, type IronSession } from 'iron-session';
 import { cookies } from 'next/headers';
 import { forbidden, redirect } from 'next/navigation';
 import { cache } from 'react';
+import type { Role } from '@/lib/domain';
 import { findMember } from '@/db/memberships';
 import { findLiveSession, insertSession, revokeSession, revokeUserSessions } from '@/db/sessions';
-import type { Member, Role } from '@/db/types';
+import type { Member } from '@/db/types';
 import { SESSION_COOKIE, SESSION_TTL_SECONDS, sessionOptions } from './config';
 
 /** What the sealed cookie holds: the session's random token, looked up in the sessions table on every request. */

@@ -1,10 +1,11 @@
 import { z } from 'zod';
+import { CALCULATOR_RULES, type CalculatorRuleKey, type UnitSystem } from '@/lib/domain';
 import { MATERIAL_IDS, material, type MaterialId } from '@/lib/materials';
-import { DRAG_MODELS, SHAPE_IDS, shapeDimensions, shapeProperties, type DragModel, type DropCase, type ShapeId } from '@/lib/physics';
+import { DRAG_MODELS, shapeProperties, type DragModel, type DropCase } from '@/lib/physics';
+import { SHAPE_CHOICES, dimensionsOf, type ShapeChoice } from '@/lib/shape-choice';
 import { fromSI, toSI } from '@/lib/units';
 import { readNumberText, writeNumberText } from '@/lib/units/number-text';
-import { checkQuantity, type QuantityRule } from '@/lib/validation/quantity';
-import type { UnitSystem } from '@/db/types';
+import { checkQuantity } from '@/lib/validation/quantity';
 
 /**
  * The calculator's form, in the user's units. Every value is the text of an input, so the page state is exactly
@@ -16,10 +17,6 @@ export const RELEASES = ['rest', 'thrown', 'swing'] as const;
 export type ReleaseKind = (typeof RELEASES)[number];
 export const MODEL_CHOICES = ['auto', ...DRAG_MODELS] as const;
 export type ModelChoice = 'auto' | DragModel;
-export const SHAPE_CHOICES = [...SHAPE_IDS, 'direct'] as const;
-export type ShapeChoice = ShapeId | 'direct';
-export const DIMENSIONS = ['diameter', 'side', 'length', 'width', 'height', 'thickness', 'breadth', 'depth'] as const;
-export type DimensionKey = (typeof DIMENSIONS)[number];
 
 export interface CalculatorValues {
   units: UnitSystem;
@@ -93,48 +90,15 @@ export const DEFAULT_VALUES: CalculatorValues = {
   model: 'auto',
 };
 
-export const RULES: Record<string, QuantityRule> = {
-  diameter: { label: 'Diameter', quantity: 'length', min: 0, max: 50, exclusiveMin: true },
-  side: { label: 'Side', quantity: 'length', min: 0, max: 50, exclusiveMin: true },
-  length: { label: 'Length', quantity: 'length', min: 0, max: 100, exclusiveMin: true },
-  width: { label: 'Width', quantity: 'length', min: 0, max: 50, exclusiveMin: true },
-  height: { label: 'Height', quantity: 'length', min: 0, max: 50, exclusiveMin: true },
-  thickness: { label: 'Thickness', quantity: 'length', min: 0, max: 10, exclusiveMin: true },
-  breadth: { label: 'Breadth', quantity: 'length', min: 0, max: 5, exclusiveMin: true },
-  depth: { label: 'Depth', quantity: 'length', min: 0, max: 5, exclusiveMin: true },
-  mass: { label: 'Mass', quantity: 'mass', min: 0, max: 500_000, exclusiveMin: true },
-  cd: { label: 'Drag coefficient', quantity: null, unitless: '', min: 0, max: 5, exclusiveMin: true },
-  area: { label: 'Reference area', quantity: 'area', min: 0, max: 1000, exclusiveMin: true },
-  volume: { label: 'Volume', quantity: 'volume', min: 0, max: 1000 },
-  addedMass: { label: 'Added-mass coefficient', quantity: null, unitless: '', min: 0, max: 10 },
-  linearCoeff: { label: 'Linear drag coefficient', quantity: 'linearDrag', min: 0, max: 1e6 },
-  altitude: { label: 'Site altitude', quantity: 'length', min: -500, max: 11_019 },
-  tempOffset: { label: 'Temperature offset from ISA', quantity: 'temperatureDelta', min: -60, max: 60 },
-  waterTemp: { label: 'Water temperature', quantity: 'temperature', min: 0, max: 40 },
-  density: { label: 'Medium density', quantity: 'density', min: 0, max: 20_000, exclusiveMin: true },
-  viscosity: { label: 'Medium viscosity', quantity: 'viscosity', min: 0, max: 100, exclusiveMin: true },
-  dropHeight: { label: 'Drop height', quantity: 'length', min: 0, max: 10_000 },
-  airGap: { label: 'Deck height above the water', quantity: 'length', min: 0, max: 500 },
-  waterDepth: { label: 'Water depth', quantity: 'length', min: 0, max: 4000, exclusiveMin: true },
-  wind: { label: 'Wind speed', quantity: 'speed', min: 0, max: 70 },
-  current: { label: 'Current', quantity: 'speed', min: 0, max: 5 },
-  releaseSpeed: { label: 'Release speed', quantity: 'speed', min: 0, max: 100 },
-  releaseAngle: { label: 'Release direction', quantity: null, unitless: '°', min: -90, max: 90 },
-};
-
 /** The number typed in a field, in SI, or the message that says why it is not acceptable. */
-export function checkNumber(key: string, raw: string, units: UnitSystem): { value: number } | { message: string } {
-  const rule = RULES[key];
+export function checkNumber(key: CalculatorRuleKey, raw: string, units: UnitSystem): { value: number } | { message: string } {
+  const rule = CALCULATOR_RULES[key];
   return checkQuantity(rule, raw, units) ?? { message: `${rule.label} is required.` };
 }
 
-export function dimensionsOf(shape: ShapeChoice): readonly DimensionKey[] {
-  return shape === 'direct' ? [] : (shapeDimensions(shape) as readonly DimensionKey[]);
-}
-
 /** Which fields the current choices use; only these are checked and sent. */
-export function activeFields(v: CalculatorValues): string[] {
-  const fields: string[] = [...dimensionsOf(v.shape)];
+export function activeFields(v: CalculatorValues): CalculatorRuleKey[] {
+  const fields: CalculatorRuleKey[] = [...dimensionsOf(v.shape)];
   if (v.massSource === 'typed' || v.shape === 'direct') fields.push('mass');
   if (v.shape === 'direct') fields.push('cd', 'area', 'volume');
   else for (const k of ['cd', 'area', 'volume'] as const) if (v[k].trim()) fields.push(k);
@@ -189,19 +153,19 @@ export const calculatorSchema = z
   })
   .superRefine((v, ctx) => {
     for (const key of activeFields(v as CalculatorValues)) {
-      const r = checkNumber(key, v[key as keyof typeof v] as string, v.units);
+      const r = checkNumber(key, v[key], v.units);
       if ('message' in r) ctx.addIssue({ code: 'custom', path: [key], message: r.message });
     }
   });
 
-function si(v: CalculatorValues, key: string): number {
-  const r = checkNumber(key, v[key as keyof CalculatorValues] as string, v.units);
+function si(v: CalculatorValues, key: CalculatorRuleKey): number {
+  const r = checkNumber(key, v[key], v.units);
   if ('message' in r) throw new Error(`${key}: ${r.message}`);
   return r.value;
 }
 
-function optionalSI(v: CalculatorValues, key: keyof CalculatorValues): number | undefined {
-  return (v[key] as string).trim() ? si(v, key) : undefined;
+function optionalSI(v: CalculatorValues, key: CalculatorRuleKey): number | undefined {
+  return v[key].trim() ? si(v, key) : undefined;
 }
 
 /** Metres for each dimension the shape needs. */
@@ -295,7 +259,7 @@ export function fromSearchParams(params: URLSearchParams | Record<string, string
 export function convertUnits(v: CalculatorValues, to: UnitSystem): CalculatorValues {
   if (v.units === to) return v;
   const out = { ...v, units: to } as Record<string, string>;
-  for (const [key, rule] of Object.entries(RULES)) {
+  for (const [key, rule] of Object.entries(CALCULATOR_RULES)) {
     const read = readNumberText(v[key as keyof CalculatorValues] as string);
     // Text that is not a number stays as typed, so its message still shows after the switch.
     if (!rule.quantity || !read || 'problem' in read || !Number.isFinite(read.value)) continue;

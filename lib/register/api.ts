@@ -4,9 +4,6 @@ import { NotFoundError } from '@/lib/errors';
 import { badRequest } from '@/lib/http/api';
 import { unitsField } from '@/lib/validation/quantity';
 
-/** Who may change the register; everyone in the organisation may read it. */
-export const EDITORS = ['admin', 'engineer'] as const;
-
 /** The unit system a JSON body declares, and the body without that key. */
 export function bodyUnits(body: Record<string, unknown>): { units: 'si' | 'us'; rest: Record<string, unknown> } {
   const { units, ...rest } = body;

@@ -1,13 +1,12 @@
 import Papa from 'papaparse';
 import type { z } from 'zod';
-import type { UnitSystem } from '@/db/types';
-import { DIMENSIONS, dimensionsOf, type ShapeChoice } from '@/lib/calculator/form';
+import { DIMENSIONS, SHAPE_LABELS, type UnitSystem } from '@/lib/domain';
+import { dimensionsOf, type ShapeChoice } from '@/lib/shape-choice';
 import { fromSI, type Quantity } from '@/lib/units';
 import { itemSchema, type ItemInput } from '@/lib/validation/item';
 import { isRefusedKey } from '@/lib/validation/input';
 import { writeNumberText } from '@/lib/units/number-text';
 import { quantityField } from '@/lib/validation/quantity';
-import { SHAPE_LABELS } from '@/components/calculator/labels';
 import { escapeCell, unescapeCell } from './csv-cells';
 import {
   CATEGORY_LABELS,
@@ -16,7 +15,7 @@ import {
   SECURING_LABELS,
   type ConsequenceLevel,
   type RegisterRow,
-} from './model';
+} from '@/lib/domain';
 
 /**
  * CSV import and export of the register of items at height. Units travel in the header ("mass_lb"), so a file says

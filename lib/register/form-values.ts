@@ -1,5 +1,7 @@
-import type { ItemRow, LevelRow, SiteRow, UnitSystem } from '@/db/types';
-import { DIMENSIONS, RULES, dimensionsOf, massSI, type CalculatorValues } from '@/lib/calculator/form';
+import { DIMENSIONS, REGISTER_RULES, type ItemCategory, type Securing, type SiteKind, type Surface, type UnitSystem } from '@/lib/domain';
+import { dimensionsOf, type ShapeChoice } from '@/lib/shape-choice';
+import type { ItemRow, LevelRow, SiteRow } from '@/db/types';
+import { massSI, type CalculatorValues } from '@/lib/calculator/form';
 import { fromSI, type Quantity } from '@/lib/units';
 import { writeNumberText } from '@/lib/units/number-text';
 
@@ -13,7 +15,11 @@ function show(quantity: Quantity | null, value: number | null | undefined, units
   return writeNumberText(v, precise ? undefined : 6);
 }
 
-export type SiteValues = Record<'name' | 'kind' | 'location' | 'surface' | 'water_depth' | 'altitude' | 'design_wind' | 'current' | 'notes', string>;
+/** Text in the user's units for every number; the enums as the schema names them. */
+export type SiteValues = Record<'name' | 'location' | 'water_depth' | 'altitude' | 'design_wind' | 'current' | 'notes', string> & {
+  kind: SiteKind;
+  surface: Surface;
+};
 
 export function siteValues(site: SiteRow | null, units: UnitSystem, precise = false): SiteValues {
   return {
@@ -29,7 +35,7 @@ export function siteValues(site: SiteRow | null, units: UnitSystem, precise = fa
   };
 }
 
-export type LevelValues = Record<'name' | 'floor_height' | 'surface' | 'water_depth' | 'notes', string>;
+export type LevelValues = Record<'name' | 'floor_height' | 'water_depth' | 'notes', string> & { surface: Surface };
 
 /** A new level takes what is below, and the water depth, from its site. */
 export function levelValues(level: LevelRow | null, site: Pick<SiteRow, 'surface' | 'water_depth_m'>, units: UnitSystem, precise = false): LevelValues {
@@ -45,17 +51,17 @@ export function levelValues(level: LevelRow | null, site: Pick<SiteRow, 'surface
 export type ItemValues = {
   tag: string;
   description: string;
-  category: string;
+  category: ItemCategory;
   quantity: string;
   mass: string;
-  shape: string;
+  shape: ShapeChoice;
   dimensions: Record<(typeof DIMENSIONS)[number], string>;
   cd: string;
   area: string;
   volume: string;
   level_id: string;
   height: string;
-  securing: string;
+  securing: Securing;
   last_inspected: string;
   notes: string;
 };
@@ -68,8 +74,9 @@ export function itemValues(item: Partial<ItemRow> | null, units: UnitSystem, pre
     category: item?.category ?? 'hand_tool',
     quantity: String(item?.quantity ?? 1),
     mass: show('mass', item?.mass_kg, units, precise),
-    shape: item?.shape ?? 'tumbling_box',
-    dimensions: Object.fromEntries(DIMENSIONS.map((k) => [k, show(RULES[k].quantity, dims[k], units, precise)])) as ItemValues['dimensions'],
+    // Stored shapes passed the item schema, so they are among the choices.
+    shape: (item?.shape as ShapeChoice | undefined) ?? 'tumbling_box',
+    dimensions: Object.fromEntries(DIMENSIONS.map((k) => [k, show(REGISTER_RULES[k].quantity, dims[k], units, precise)])) as ItemValues['dimensions'],
     cd: show(null, item?.cd, units, precise),
     area: show('area', item?.area_m2, units, precise),
     volume: show('volume', item?.volume_m3, units, precise),

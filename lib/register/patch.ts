@@ -1,4 +1,5 @@
-import type { ItemRow, SiteRow, UnitSystem } from '@/db/types';
+import type { UnitSystem } from '@/lib/domain';
+import type { ItemRow, SiteRow } from '@/db/types';
 import { itemSchema, type ItemInput } from '@/lib/validation/item';
 import { siteSchema, type SiteInput } from '@/lib/validation/site';
 import { itemValues, siteValues } from './form-values';

@@ -1,26 +1,12 @@
-import type { UnitSystem } from '@/db/types';
+import type { Quantity, UnitSystem } from '@/lib/domain/units';
+
+export type { Quantity };
 
 // Exact definitions of NIST SP 811 (2008), Appendix B: every US customary unit here is built from these four.
 const FT = 0.3048; // m
 const LB = 0.45359237; // kg
 const LBF = LB * 9.80665; // N: a pound-force is a pound under standard gravity
 const DEG_F = 5 / 9; // K (a temperature difference)
-
-export type Quantity =
-  | 'length'
-  | 'mass'
-  | 'time'
-  | 'speed'
-  | 'energy'
-  | 'momentum'
-  | 'area'
-  | 'volume'
-  | 'density'
-  | 'viscosity'
-  | 'linearDrag'
-  | 'acceleration'
-  | 'temperature'
-  | 'temperatureDelta';
 
 interface UnitPair {
   /** One US customary unit in SI. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { LADDER_COLOUR_IDS } from '@/lib/register/model';
+import { LADDER_COLOUR_IDS } from '@/lib/domain';
 import { enumField, quantityField, textField } from './quantity';
 
 const rung = z.object({

@@ -1,6 +1,7 @@
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { z } from 'zod';
+import { UUID_PATTERN } from '@/lib/domain';
 
-/** Ids come from URLs and forms; anything that is not a UUID cannot name a row and is simply not found. */
-export function isUuid(value: unknown): value is string {
-  return typeof value === 'string' && UUID.test(value);
+/** A row id in a form or JSON body, with the one message the field shows for anything else. */
+export function uuidField(message: string) {
+  return z.string({ error: message }).regex(UUID_PATTERN, message);
 }

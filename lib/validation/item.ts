@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import type { UnitSystem } from '@/db/types';
-import { DIMENSIONS, RULES, SHAPE_CHOICES, dimensionsOf, type ShapeChoice } from '@/lib/calculator/form';
+import { DIMENSIONS, ITEM_CATEGORIES, REGISTER_RULES, SECURING, type UnitSystem } from '@/lib/domain';
+import { dimensionsOf, SHAPE_CHOICES, type ShapeChoice } from '@/lib/shape-choice';
 import { PhysicsInputError, shapeProperties } from '@/lib/physics';
-import { ITEM_CATEGORIES, SECURING } from '@/lib/register/model';
+import { uuidField } from './ids';
 import { enumField, quantityField, textField } from './quantity';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -30,7 +30,7 @@ function inspectionDate() {
  * the stored column names. A catalogue shape needs its dimensions; "direct" needs a drag coefficient and an area.
  */
 export function itemSchema(units: UnitSystem) {
-  const dims = Object.fromEntries(DIMENSIONS.map((k) => [k, quantityField(RULES[k], units, false)])) as Record<
+  const dims = Object.fromEntries(DIMENSIONS.map((k) => [k, quantityField(REGISTER_RULES[k], units, false)])) as Record<
     (typeof DIMENSIONS)[number],
     z.ZodType<number | undefined, unknown>
   >;
@@ -39,15 +39,15 @@ export function itemSchema(units: UnitSystem) {
       tag: textField('Tag', 40, 1),
       description: textField('Description', 200, 1),
       category: enumField(ITEM_CATEGORIES, `Category must be one of: ${ITEM_CATEGORIES.join(', ')}.`),
-      quantity: quantityField({ label: 'Quantity', quantity: null, min: 1, max: 100_000, integer: true }, units, false).transform((q) => q ?? 1),
-      mass: quantityField(RULES.mass, units, true),
+      quantity: quantityField(REGISTER_RULES.quantity, units, false).transform((q) => q ?? 1),
+      mass: quantityField(REGISTER_RULES.mass, units, true),
       shape: enumField(SHAPE_CHOICES as unknown as [ShapeChoice, ...ShapeChoice[]], `Shape must be one of: ${SHAPE_CHOICES.join(', ')}.`),
       dimensions: z.preprocess((v) => (v === undefined || v === null ? {} : v), z.object(dims, { error: 'Dimensions must be an object.' })),
-      cd: quantityField(RULES.cd, units, false),
-      area: quantityField(RULES.area, units, false),
-      volume: quantityField(RULES.volume, units, false),
-      level_id: z.uuid('Level must be one of the site’s levels.'),
-      height: quantityField({ label: 'Height', quantity: 'length', min: 0, max: 10_000 }, units, false),
+      cd: quantityField(REGISTER_RULES.cd, units, false),
+      area: quantityField(REGISTER_RULES.area, units, false),
+      volume: quantityField(REGISTER_RULES.volume, units, false),
+      level_id: uuidField('Level must be one of the site’s levels.'),
+      height: quantityField(REGISTER_RULES.releaseHeight, units, false),
       securing: enumField(SECURING, `Securing must be one of: ${SECURING.join(', ')}.`),
       last_inspected: inspectionDate(),
       notes: textField('Notes', 2000),
@@ -63,7 +63,7 @@ export function itemSchema(units: UnitSystem) {
       let complete = true;
       for (const k of needed) {
         if (item.dimensions[k] === undefined) {
-          ctx.addIssue({ code: 'custom', path: ['dimensions', k], message: `${RULES[k].label} is required for this shape.` });
+          ctx.addIssue({ code: 'custom', path: ['dimensions', k], message: `${REGISTER_RULES[k].label} is required for this shape.` });
           complete = false;
         }
       }

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import type { UnitSystem } from '@/db/types';
-import { SURFACES } from '@/lib/register/model';
+import { SURFACES, type UnitSystem } from '@/lib/domain';
 import { enumField, quantityField, textField } from './quantity';
 import { WATER_DEPTH } from './site';
 

@@ -1,9 +1,10 @@
 import { z } from 'zod';
-import { ROLES } from '@/db/types';
+import { ROLES } from '@/lib/domain';
+import { uuidField } from './ids';
 import { userFields } from './user';
 
 const role = z.enum(ROLES, { error: 'Role must be admin, engineer, reviewer or viewer.' });
-const userId = z.uuid('Member id must be a UUID.');
+const userId = uuidField('Member id must be a UUID.');
 
 export const inviteMemberSchema = z.object({
   displayName: userFields.displayName,

@@ -1,21 +1,9 @@
 import { z } from 'zod';
-import type { UnitSystem } from '@/db/types';
-import { formatNumber, fromSI, toSI, unitLabel, type Quantity } from '@/lib/units';
+import type { QuantityRule, UnitSystem } from '@/lib/domain';
+import { formatNumber, fromSI, toSI, unitLabel } from '@/lib/units';
 import { NOT_A_NUMBER, readNumberText } from '@/lib/units/number-text';
 import { storableText } from './text';
 
-export interface QuantityRule {
-  label: string;
-  /** null for pure numbers (a drag coefficient, a count) */
-  quantity: Quantity | null;
-  /** SI limits */
-  min?: number;
-  max?: number;
-  exclusiveMin?: boolean;
-  integer?: boolean;
-  /** What follows a pure number's limit in a message ("°"). */
-  unitless?: string;
-}
 
 function limit(rule: QuantityRule, bound: number, units: UnitSystem): string {
   if (!rule.quantity) return `${formatNumber(bound, 4)}${rule.unitless ?? ''}`;

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import type { UnitSystem } from '@/db/types';
-import { SITE_KINDS, SURFACES } from '@/lib/register/model';
+import { SITE_KINDS, SURFACES, type UnitSystem } from '@/lib/domain';
 import { enumField, quantityField, textField } from './quantity';
 
 /** Limits shared with levels: the ISA model's range, and what a dropped-object survey can meet. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { UNIT_SYSTEMS } from '@/db/types';
+import { UNIT_SYSTEMS } from '@/lib/domain';
 import { storableText } from './text';
 
 const email = z

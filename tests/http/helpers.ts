@@ -4,8 +4,8 @@ import http, { type IncomingHttpHeaders } from 'node:http';
 import path from 'node:path';
 import bcrypt from 'bcryptjs';
 import { inject } from 'vitest';
+import type { Role } from '@/lib/domain';
 import { getDb } from '@/db/knex';
-import type { Role } from '@/db/types';
 
 export const base = inject('httpBase');
 export const PASSWORD = 'http-test-password-9371';

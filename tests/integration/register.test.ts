@@ -1,4 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
+import type { ConsequenceLevel } from '@/lib/domain';
 import { GET as getLadder, PUT as putLadder } from '@/app/api/v1/consequence-levels/route';
 import { DELETE as deleteItemRoute, PATCH as patchItem } from '@/app/api/v1/items/[id]/route';
 import { POST as postSite } from '@/app/api/v1/sites/route';
@@ -17,7 +18,6 @@ import { startSession } from '@/lib/auth';
 import { STANDARD_GRAVITY } from '@/lib/physics';
 import { computeItem, inputsHash, itemDropCase, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
 import { itemsTemplateCsv } from '@/lib/register/csv';
-import type { ConsequenceLevel } from '@/lib/register/model';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';

@@ -1,13 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  calculatorSchema,
-  convertUnits,
-  DEFAULT_VALUES,
-  fromSearchParams,
-  toDropCase,
-  toSearchParams,
-  type CalculatorValues,
-} from '@/lib/calculator/form';
+import { calculatorSchema, convertUnits, DEFAULT_VALUES, fromSearchParams, toDropCase, toSearchParams, type CalculatorValues } from '@/lib/calculator/form';
 import { toFieldErrors } from '@/lib/validation/issues';
 
 const v = (over: Partial<CalculatorValues>): CalculatorValues => ({ ...DEFAULT_VALUES, ...over });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import type { ConsequenceLevel, RegisterViewRow } from '@/lib/domain';
 import { buildEnergyFigure } from '@/components/register/energy-figure';
 import { plotText } from '@/lib/plot-text';
-import type { ConsequenceLevel, RegisterViewRow } from '@/lib/register/model';
 
 // The probe's payload (issue 9, defect 12) and the other tags Plotly's text renderer interprets (plotly.js
 // src/lib/svg_text_utils.js: a, b, i, em, sup, sub, span with style, br).

@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
+import type { ConsequenceLevel } from '@/lib/domain';
 import { CSV_LIMITS, itemsTemplateCsv, parseItemsCsv, registerCsv, type RegisterExportRow } from '@/lib/register/csv';
-import type { ConsequenceLevel } from '@/lib/register/model';
 
 // Exact definitions: NIST SP 811 (2008), Appendix B: 1 ft = 0.3048 m, 1 lb = 0.45359237 kg,
 // 1 lbf = 4.4482216152605 N, so 1 ft·lbf = 0.3048 × 4.4482216152605 J.

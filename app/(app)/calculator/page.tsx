@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { can } from '@/lib/auth/policy';
 import { Calculator } from '@/components/calculator/calculator';
 import { fromSearchParams } from '@/lib/calculator/form';
 import { requireRole } from '@/lib/auth';
@@ -19,7 +20,7 @@ export default async function CalculatorPage({ searchParams }: { searchParams: P
           address bar reproduces this calculation for anyone in your organisation.
         </p>
       </header>
-      <Calculator initial={initial} canRegister={me.role === 'admin' || me.role === 'engineer'} />
+      <Calculator initial={initial} canRegister={can(me, 'register.edit')} />
     </div>
   );
 }

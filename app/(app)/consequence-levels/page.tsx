@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { can } from '@/lib/auth/policy';
 import { LadderEditor } from '@/components/ladder/ladder-editor';
 import { LadderView } from '@/components/ladder/ladder-view';
 import { SafetyNote } from '@/components/layout/safety-note';
@@ -31,7 +32,7 @@ export default async function ConsequenceLadderPage() {
 
       <SafetyNote />
 
-      {member.role === 'admin' ? (
+      {can(member, 'ladder.edit') ? (
         <section className="rounded-card bg-paper-raised p-5 shadow-card" aria-labelledby="ladder-edit">
           <h2 id="ladder-edit" className="mb-1 text-lg font-bold">
             Change the ladder

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
+import { rolesFor } from '@/lib/auth/policy';
 import { AuditList } from '@/components/members/audit-list';
 import { InviteMemberForm } from '@/components/members/invite-member-form';
 import { MemberRow } from '@/components/members/member-row';
@@ -11,7 +12,7 @@ import { requireRole } from '@/lib/auth';
 export const metadata: Metadata = { title: 'Members' };
 
 export default async function MembersPage() {
-  const admin = await requireRole(['admin']);
+  const admin = await requireRole(rolesFor('members.manage'));
   if (admin.mustChangePassword) redirect('/profile?welcome=1');
   const [members, audit] = await Promise.all([listMembers(admin.organisationId), listAudit(admin.organisationId, 20)]);
   const names = Object.fromEntries(members.map((m) => [m.userId, m.displayName]));

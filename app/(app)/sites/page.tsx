@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { can } from '@/lib/auth/policy';
 import { SafetyNote } from '@/components/layout/safety-note';
 import { SiteForm } from '@/components/sites/site-form';
 import { SiteTable } from '@/components/sites/site-table';
@@ -12,7 +13,7 @@ export const metadata: Metadata = { title: 'Sites' };
 export default async function SitesPage() {
   const member = await requireRole('any');
   const [sites, ladder] = await Promise.all([listSites(member.organisationId), listLadder(member.organisationId)]);
-  const canEdit = member.role === 'admin' || member.role === 'engineer';
+  const canEdit = can(member, 'register.edit');
   return (
     <div className="flex flex-col gap-6">
       <header className="flex flex-col gap-1">

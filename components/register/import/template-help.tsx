@@ -1,4 +1,4 @@
-import { DIMENSIONS } from '@/lib/calculator/form';
+import { DIMENSIONS } from '@/lib/domain';
 
 type Units = 'si' | 'us';
 

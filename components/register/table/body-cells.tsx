@@ -1,5 +1,5 @@
 import { flexRender, type Cell, type Row } from '@tanstack/react-table';
-import type { RegisterViewRow } from '@/lib/register/model';
+import type { RegisterViewRow } from '@/lib/domain';
 
 /** Columns that show the stored result; a row without one writes its reason across them instead. */
 const RESULT_CELL_IDS = new Set(['fall_time', 'impact_speed', 'energy', 'drift', 'consequence']);

@@ -1,9 +1,7 @@
 import Link from 'next/link';
 import { useMemo } from 'react';
 import type { ColumnDef, FilterFn, SortingFn } from '@tanstack/react-table';
-import type { UnitSystem } from '@/db/types';
-import { SHAPE_LABELS } from '@/components/calculator/labels';
-import { CATEGORY_LABELS, SECURING_LABELS, type ConsequenceLevel, type RegisterViewRow, type SiteLevelRef } from '@/lib/register/model';
+import { CATEGORY_LABELS, SECURING_LABELS, SHAPE_LABELS, type ConsequenceLevel, type RegisterViewRow, type SiteLevelRef, type UnitSystem } from '@/lib/domain';
 import { formatQuantity, unitLabel, type Quantity } from '@/lib/units';
 import { ConsequenceBadge } from '../consequence-badge';
 import { ladderById } from '../ladder';

@@ -2,7 +2,7 @@
 
 import { useEffect, useRef, useState } from 'react';
 import type { Column } from '@tanstack/react-table';
-import type { RegisterViewRow } from '@/lib/register/model';
+import type { RegisterViewRow } from '@/lib/domain';
 import { buttonStyles } from '@/components/ui/button';
 import { controlStyle, Labelled } from '@/components/ui/labelled';
 

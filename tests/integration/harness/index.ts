@@ -1,6 +1,6 @@
+import type { Role } from '@/lib/domain';
 import { insertDefaultLadder } from '@/db/consequence-levels';
 import { getDb } from '@/db/knex';
-import type { Role } from '@/db/types';
 import type { ActionState } from '@/lib/actions/state';
 import { hashPassword } from '@/lib/auth/password';
 import { POST as postSession } from '@/app/api/v1/session/route';

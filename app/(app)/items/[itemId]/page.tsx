@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { can } from '@/lib/auth/policy';
+import { SURFACE_LABELS } from '@/lib/domain';
 import { DropResults } from '@/components/calculator/drop-results';
 import { ConfirmForm } from '@/components/forms/confirm-form';
 import { ItemFacts } from '@/components/items/item-facts';
@@ -15,7 +17,6 @@ import { requireRole } from '@/lib/auth';
 import { simulateDrop } from '@/lib/physics';
 import { inputsHash, itemDropCase } from '@/lib/register/compute';
 import { itemValues } from '@/lib/register/form-values';
-import { SURFACE_LABELS } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Item at height' };
@@ -37,7 +38,7 @@ export default async function ItemPage({ params, searchParams }: { params: Promi
   const [{ itemId }, query] = await Promise.all([params, searchParams]);
   const item = await findItem(member.organisationId, itemId);
   if (!item) notFound();
-  const canEdit = member.role === 'admin' || member.role === 'engineer';
+  const canEdit = can(member, 'register.edit');
   const units = member.unitSystem;
   const [ladder, history, levels] = await Promise.all([
     listLadder(member.organisationId),

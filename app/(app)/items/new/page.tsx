@@ -1,15 +1,15 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { rolesFor } from '@/lib/auth/policy';
+import { SITE_KIND_LABELS } from '@/lib/domain';
 import { listSites } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
-import { EDITORS } from '@/lib/register/api';
-import { SITE_KIND_LABELS } from '@/lib/register/model';
 
 export const metadata: Metadata = { title: 'Add to register' };
 
 /** The calculator's "Add to register" lands here to choose the site; the case travels on in the query. */
 export default async function ChooseSitePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const [sites, query] = await Promise.all([listSites(member.organisationId), searchParams]);
   const carried = new URLSearchParams();
   for (const [k, v] of Object.entries(query)) if (typeof v === 'string') carried.set(k, v);

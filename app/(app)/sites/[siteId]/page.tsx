@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { can } from '@/lib/auth/policy';
+import { SITE_KIND_LABELS, SURFACE_LABELS } from '@/lib/domain';
 import { ConfirmForm } from '@/components/forms/confirm-form';
 import { LevelForm } from '@/components/sites/level-form';
 import { LevelList } from '@/components/sites/level-list';
@@ -14,7 +16,7 @@ import { findSite } from '@/db/sites';
 import { deleteSiteAction } from '@/lib/actions/register';
 import { requireRole } from '@/lib/auth';
 import { levelValues, siteValues } from '@/lib/register/form-values';
-import { SITE_KIND_LABELS, SURFACE_LABELS, packRegister } from '@/lib/register/model';
+import { packRegister } from '@/lib/register/model';
 import { formatQuantity } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Site register' };
@@ -32,7 +34,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
     listLadder(member.organisationId),
   ]);
   const units = member.unitSystem;
-  const canEdit = member.role === 'admin' || member.role === 'engineer';
+  const canEdit = can(member, 'register.edit');
   const levelEntries = levels.map((l) => ({ ...l, values: levelValues(l, site, units) }));
 
   return (

@@ -1,17 +1,17 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { rolesFor } from '@/lib/auth/policy';
 import { ImportPanel } from '@/components/register/import-panel';
 import { listLevels } from '@/db/levels';
 import { findSite } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
-import { EDITORS } from '@/lib/register/api';
 
 export const metadata: Metadata = { title: 'Import items' };
 
 
 export default async function ImportPage({ params }: { params: Promise<{ siteId: string }> }) {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const { siteId } = await params;
   const site = await findSite(member.organisationId, siteId);
   if (!site) notFound();

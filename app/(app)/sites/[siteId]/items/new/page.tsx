@@ -1,12 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { rolesFor } from '@/lib/auth/policy';
 import { ItemForm } from '@/components/items/item-form';
 import { listLevels } from '@/db/levels';
 import { findSite } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
 import { fromSearchParams } from '@/lib/calculator/form';
-import { EDITORS } from '@/lib/register/api';
 import { itemValues, itemValuesFromCalculator } from '@/lib/register/form-values';
 import { formatQuantity } from '@/lib/units';
 
@@ -20,7 +20,7 @@ export default async function NewItemPage({
   params: Promise<{ siteId: string }>;
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
-  const member = await requireRole(EDITORS);
+  const member = await requireRole(rolesFor('register.edit'));
   const [{ siteId }, query] = await Promise.all([params, searchParams]);
   const site = await findSite(member.organisationId, siteId);
   if (!site) notFound();

@@ -1,6 +1,7 @@
+import { rolesFor } from '@/lib/auth/policy';
 import { findItem, listRegister } from '@/db/items';
 import { apiRoute, readJsonObject } from '@/lib/http/api';
-import { bodyUnits, EDITORS, siteOf } from '@/lib/register/api';
+import { bodyUnits, siteOf } from '@/lib/register/api';
 import { itemSchema } from '@/lib/validation/item';
 import { createItem } from '@/lib/register/commands';
 
@@ -12,7 +13,7 @@ export const GET = apiRoute<Params>('any', async (_request, { member, params }) 
 });
 
 /** The item is computed at the site's design wind before it is stored; the answer carries its stored result. */
-export const POST = apiRoute<Params>(EDITORS, async (request, { member, params }) => {
+export const POST = apiRoute<Params>(rolesFor('register.edit'), async (request, { member, params }) => {
   const site = await siteOf(member, params.id);
   const { units, rest } = bodyUnits(await readJsonObject(request));
   const created = await createItem(member.organisationId, member.userId, site.id, itemSchema(units).parse(rest));

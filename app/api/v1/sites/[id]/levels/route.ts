@@ -1,6 +1,7 @@
+import { rolesFor } from '@/lib/auth/policy';
 import { createLevel, listLevels } from '@/db/levels';
 import { apiRoute, readJsonObject } from '@/lib/http/api';
-import { bodyUnits, EDITORS, siteOf } from '@/lib/register/api';
+import { bodyUnits, siteOf } from '@/lib/register/api';
 import { levelValues } from '@/lib/register/form-values';
 import { levelSchema } from '@/lib/validation/level';
 
@@ -12,7 +13,7 @@ export const GET = apiRoute<Params>('any', async (_request, { member, params }) 
 });
 
 /** What is below and the water depth default to the site's when the body leaves them out. */
-export const POST = apiRoute<Params>(EDITORS, async (request, { member, params }) => {
+export const POST = apiRoute<Params>(rolesFor('register.edit'), async (request, { member, params }) => {
   const site = await siteOf(member, params.id);
   const { units, rest } = bodyUnits(await readJsonObject(request));
   const defaults = levelValues(null, site, units, true);

@@ -1,7 +1,8 @@
+import { rolesFor } from '@/lib/auth/policy';
 import { siteTags } from '@/db/items';
 import { listLevels } from '@/db/levels';
 import { apiRoute, badRequest } from '@/lib/http/api';
-import { EDITORS, siteOf } from '@/lib/register/api';
+import { siteOf } from '@/lib/register/api';
 import { CSV_LIMITS, parseItemsCsv, type CsvProblem } from '@/lib/register/csv';
 import { cleanText } from '@/lib/validation/text';
 import { importItems } from '@/lib/register/commands';
@@ -17,7 +18,7 @@ const asIssue = (p: CsvProblem) => ({ path: p.line ? `line ${p.line}${p.column ?
  * `valid-only` imports the rows without problems, `all-or-nothing` imports every row or, if any has a problem,
  * none. Writing is one transaction either way.
  */
-export const POST = apiRoute<Params>(EDITORS, async (request, { member, params }) => {
+export const POST = apiRoute<Params>(rolesFor('register.edit'), async (request, { member, params }) => {
   const site = await siteOf(member, params.id);
   // Refuse an oversized upload before reading it into memory; the multipart wrapping adds a little.
   if (Number(request.headers.get('content-length') ?? 0) > CSV_LIMITS.maxBytes + 64 * 1024) {

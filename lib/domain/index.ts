@@ -1,0 +1,8 @@
+/** The vocabulary at the bottom of every layer: plain TypeScript, importing nothing outside lib/domain. */
+export * from './units';
+export * from './roles';
+export * from './register';
+export * from './shapes';
+export * from './quantity-rules';
+export * from './ladder';
+export * from './ids';
