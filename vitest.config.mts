@@ -1,7 +1,13 @@
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // Server modules start with `import 'server-only'`, which throws outside React's server condition; tests import
+    // them directly, so here it is the package's own empty module (what Next resolves it to on the server).
+    alias: { 'server-only': fileURLToPath(new URL('./node_modules/server-only/empty.js', import.meta.url)) },
+  },
   test: {
     // The app's logger stays quiet inside test processes; the HTTP tests read the log of the server they start.
     env: { LOG_LEVEL: 'silent' },

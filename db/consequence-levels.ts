@@ -1,8 +1,8 @@
-import { DEFAULT_LADDER, type ConsequenceLevel } from '@/lib/domain';
+import { classify, DEFAULT_LADDER, type ConsequenceLevel } from '@/lib/domain';
 import { appendAudit } from './audit';
 import { getDb } from './knex';
 import { lockItems, lockOrganisation } from './locks';
-import type { Classifier, LadderBound } from './results';
+import type { LadderBound } from './results';
 import type { Conn, LadderFields } from './types';
 
 const COLUMNS = ['id', 'rank', 'name', 'lower_bound_j', 'colour', 'guidance', 'source'] as const;
@@ -16,8 +16,11 @@ export async function insertDefaultLadder(trx: Conn, organisationId: string): Pr
   await trx('consequence_levels').insert(DEFAULT_LADDER.map((l) => ({ ...l, organisation_id: organisationId })));
 }
 
-/** Points every item of the organisation at the level its stored energy falls in, in one statement per chunk. */
-async function reclassifyItems(trx: Conn, organisationId: string, ladder: readonly LadderBound[], classify: Classifier): Promise<number> {
+/**
+ * Points every item of the organisation at the level its stored energy falls in, by classify() in lib/domain: the
+ * one place the rule is written, so SQL never holds a second copy. One statement per 5,000 items.
+ */
+async function reclassifyItems(trx: Conn, organisationId: string, ladder: readonly LadderBound[]): Promise<number> {
   const rows: { id: string; effective_energy_j: number | null }[] = await trx('items')
     .where({ organisation_id: organisationId })
     .select('id', 'effective_energy_j');
@@ -26,6 +29,7 @@ async function reclassifyItems(trx: Conn, organisationId: string, ladder: readon
     const slice = rows.slice(start, start + CHUNK);
     await trx.raw(
       `UPDATE items AS i SET consequence_level_id = v.level FROM unnest(?::uuid[], ?::uuid[]) AS v(id, level) WHERE i.id = v.id`,
+      // pg sends each JS array as a PostgreSQL array; null entries stay NULL.
       [slice.map((r) => r.id), slice.map((r) => classify(r.effective_energy_j, ladder))] as unknown as string[][],
     );
   }
@@ -40,7 +44,6 @@ export async function replaceLadder(
   organisationId: string,
   actorUserId: string,
   input: LadderFields,
-  classify: Classifier,
   conn: Conn = getDb(),
 ): Promise<{ ladder: ConsequenceLevel[]; reclassified: number }> {
   return conn.transaction(async (trx) => {
@@ -54,7 +57,7 @@ export async function replaceLadder(
       input.levels.map((l, i) => ({ ...l, rank: i + 1, organisation_id: organisationId })),
     );
     const ladder = await listLadder(organisationId, trx);
-    const reclassified = await reclassifyItems(trx, organisationId, ladder, classify);
+    const reclassified = await reclassifyItems(trx, organisationId, ladder);
     const strip = (levels: ConsequenceLevel[]) => levels.map(({ name, lower_bound_j, colour }) => ({ name, lower_bound_j, colour }));
     await appendAudit(trx, {
       organisationId,

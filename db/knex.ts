@@ -1,3 +1,4 @@
+import 'server-only';
 import knex, { type Knex } from 'knex';
 import type { Socket } from 'node:net';
 import { types } from 'pg';

@@ -35,8 +35,8 @@ for _ in $(seq 1 60); do
   sleep 0.5
 done
 log "register"
-BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/register.ts
+BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx --conditions=react-server bench/register.ts
 log "drops and health under load"
-BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/drops.ts
+BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx --conditions=react-server bench/drops.ts
 log "health during a sign-in flood"
-BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx bench/sign-in-flood.ts
+BENCH_URL="http://127.0.0.1:$BENCH_PORT" node_modules/.bin/tsx --conditions=react-server bench/sign-in-flood.ts

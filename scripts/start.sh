@@ -27,7 +27,8 @@ else
   ensure_database plumbline
 fi
 run_migrations
-node --import tsx db/seed/demo.ts 2>"$DATA_DIR/seed.log" || { cat "$DATA_DIR/seed.log" >&2; die "demo seed failed"; }
+# Server modules import "server-only", which loads only under React's server condition.
+node --conditions=react-server --import tsx db/seed/demo.ts 2>"$DATA_DIR/seed.log" || { cat "$DATA_DIR/seed.log" >&2; die "demo seed failed"; }
 log "building the app"
 node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log" >&2; die "build failed (log: .data/build.log)"; }
 

@@ -25,6 +25,8 @@ rm -rf "$RESULTS"
 mkdir -p "$RESULTS"
 
 status=0
+log "lint (ESLint with the Next.js rules)"
+node_modules/.bin/eslint . || status=1
 run_migrations
 log "unit and integration tests (vitest)"
 node_modules/.bin/vitest run --project unit --project integration \

@@ -40,6 +40,7 @@ function CalculatorBody({ initial, canRegister }: { initial: CalculatorValues; c
   });
   const [, startTransition] = useTransition();
   const [ready, setReady] = useState(false);
+  // eslint-disable-next-line react-hooks/set-state-in-effect -- the point is one render before mount and one after
   useEffect(() => setReady(true), []);
   const watched = useWatch({ control: form.control }) as CalculatorValues;
   const values = useMemo(() => ({ ...initial, ...watched }), [initial, watched]);

@@ -5,6 +5,7 @@ import type { UnitSystem } from '@/lib/domain';
 import type { DropCase, DropResult } from '@/lib/physics';
 import { formatNumber, formatQuantity, unitLabel, fromSI, type Quantity } from '@/lib/units';
 import { SafetyNote } from '@/components/layout/safety-note';
+import { buttonStyles } from '@/components/ui/button';
 import { EnergyScale, HeightPlot, PathPlot, SpeedPlot } from './drop-plots';
 import { summaryText } from './summary-text';
 
@@ -110,7 +111,7 @@ export function DropResults({ result, dropCase, units, description, updating }: 
         <button
           type="button"
           onClick={copy}
-          className="rounded-md border border-paper-rule bg-paper-raised px-3 py-1.5 text-sm font-semibold hover:bg-paper-sunk"
+          className={buttonStyles.small}
         >
           {copied ? 'Summary copied' : 'Copy summary'}
         </button>

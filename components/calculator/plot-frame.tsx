@@ -21,6 +21,7 @@ const CONFIG: Partial<Config> = { displaylogo: false, responsive: true, modeBarB
 
 export function PlotFrame({ title, data, layout, height = 280 }: { title: string; data: Data[]; layout: Partial<Layout>; height?: number }) {
   const [font, setFont] = useState('system-ui, sans-serif');
+  // eslint-disable-next-line react-hooks/set-state-in-effect -- the page's font is known only once it is in the document
   useEffect(() => setFont(getComputedStyle(document.body).fontFamily), []);
   return (
     <figure className="flex flex-col gap-1 rounded-card bg-paper-raised p-3 shadow-card">

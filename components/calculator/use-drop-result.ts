@@ -5,7 +5,7 @@ import { useEffect, useState } from 'react';
 import type { DropCase, DropResult } from '@/lib/physics';
 import type { FieldIssue } from '@/lib/validation/issues';
 
-export class DropRequestError extends Error {
+class DropRequestError extends Error {
   constructor(
     message: string,
     public readonly issues: FieldIssue[] = [],

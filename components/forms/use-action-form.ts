@@ -20,6 +20,7 @@ export function useActionForm<S extends z.ZodType, TValues extends FieldValues &
   const [state, formAction, pending] = useActionState(action, idle);
   // react-hook-form writes its defaults into the inputs when it mounts; `ready` tells tests (and styles) when typing is safe.
   const [ready, setReady] = useState(false);
+  // eslint-disable-next-line react-hooks/set-state-in-effect -- the point is one render before mount and one after
   useEffect(() => setReady(true), []);
   const form = useForm<TValues>({
     // The schema reads more than the form sends (JSON numbers as well as text), so its input type is wider than

@@ -1,8 +1,9 @@
+import 'server-only';
 import type { SessionOptions } from 'iron-session';
 
 export const SESSION_COOKIE = 'plumbline_session';
 export const SESSION_TTL_SECONDS = 8 * 60 * 60;
-export const MIN_SECRET_LENGTH = 32;
+const MIN_SECRET_LENGTH = 32;
 
 export class ConfigurationError extends Error {
   constructor(message: string) {

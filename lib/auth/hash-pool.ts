@@ -1,3 +1,4 @@
+import 'server-only';
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import path from 'node:path';
@@ -10,15 +11,15 @@ import type { HashTask } from './hash-worker';
  * two threads (one fewer than the cores): hashing competes with the drop solver's pool for the same cores.
  */
 const WORKER_FILE = path.join(process.cwd(), '.build', 'hash-worker.mjs');
-export const HASH_THREADS = Math.max(1, Math.min(2, availableParallelism() - 1));
+const HASH_THREADS = Math.max(1, Math.min(2, availableParallelism() - 1));
 
 /**
  * Hashes admitted at once, running and waiting. At cost 12 one hash takes about a quarter of a second on one thread
  * here, so a full queue is a few seconds of work; beyond it a sign-in is answered 503 at once rather than queued.
  */
 export const HASH_QUEUE_LIMIT = HASH_THREADS + 16;
-export const HASH_RETRY_AFTER_S = 2;
-export const HASH_BUSY = `Plumbline is busy checking other sign-ins: try again in ${HASH_RETRY_AFTER_S} seconds.`;
+const HASH_RETRY_AFTER_S = 2;
+const HASH_BUSY = `Plumbline is busy checking other sign-ins: try again in ${HASH_RETRY_AFTER_S} seconds.`;
 
 interface PoolState {
   pool: Piscina<HashTask, string | boolean>;

@@ -1,15 +1,16 @@
+import 'server-only';
 import type { AttemptHistory } from '@/db/sign-in-attempts';
 
 /** Failures per e-mail and address in the window before that pair waits for the window to pass. */
 export const MAX_FAILURES = 10;
-export const WINDOW_MINUTES = 15;
+const WINDOW_MINUTES = 15;
 /** Failures per account, from anywhere, before each further try waits: 2^(n-5) s, at most ACCOUNT_BACKOFF_CAP_S. */
 export const ACCOUNT_FREE_FAILURES = 5;
 export const ACCOUNT_BACKOFF_CAP_S = 5 * 60;
 /** Failures per address across all accounts in the window. */
 export const MAX_ADDRESS_FAILURES = 30;
 /** An address that signed in to the account this recently skips the account's back-off (never the other limits). */
-export const KNOWN_ADDRESS_DAYS = 30;
+const KNOWN_ADDRESS_DAYS = 30;
 
 export type LimitReason = 'pair' | 'account' | 'address';
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 import { getIronSession, type IronSession } from 'iron-session';
 import { cookies } from 'next/headers';

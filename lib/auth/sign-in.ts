@@ -1,3 +1,4 @@
+import 'server-only';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { firstMembership } from '@/db/memberships';
 import { cancelSignInAttempt, markSignInSucceeded, pruneSignInAttempts, reserveSignInAttempt } from '@/db/sign-in-attempts';
@@ -17,7 +18,7 @@ export const WRONG_CREDENTIALS = 'That e-mail and password do not match an accou
  * A wrong e-mail or password is answered no sooner than this after the request began, so neither the hash's time
  * nor the database's tells an unknown e-mail from a known one (common practice for sign-in forms).
  */
-export const WRONG_ANSWER_FLOOR_MS = 1000;
+const WRONG_ANSWER_FLOOR_MS = 1000;
 
 /**
  * Limit checks in flight at once, per process: each holds a pooled database connection (and may wait on another's

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CALCULATOR_RULES, type CalculatorRuleKey, type DimensionKey, type UnitSystem } from '@/lib/domain';
+import { CALCULATOR_RULES, type CalculatorRuleKey, type UnitSystem } from '@/lib/domain';
 import { MATERIAL_IDS, material, type MaterialId } from '@/lib/materials';
 import { DRAG_MODELS, shapeProperties, type DragModel, type DropCase } from '@/lib/physics';
 import { SHAPE_CHOICES, dimensionsOf, type ShapeChoice } from '@/lib/shape-choice';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import path from 'node:path';

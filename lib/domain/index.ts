@@ -4,6 +4,7 @@ export * from './roles';
 export * from './register';
 export * from './shapes';
 export * from './quantity-rules';
+export * from './ladder';
 export * from './ids';
 export * from './reference-energies';
 export * from './default-ladder';

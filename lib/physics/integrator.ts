@@ -106,7 +106,6 @@ const MAX_RETRIES = 40;
  * step. The wrapper then restarts odex from the last good state with a smaller first step.
  */
 export function integrate(request: IntegrationRequest, options: Required<IntegratorOptions>): IntegrationResult {
-  const n = request.y0.length;
   const T = request.timeScale ?? 1;
   const hits: EventHit[] = [];
   let tStart = request.t0;

@@ -14,7 +14,7 @@ import type { LadderInput } from '@/lib/validation/consequence-level';
 import type { ItemInput } from '@/lib/validation/item';
 import type { LevelInput } from '@/lib/validation/level';
 import type { SiteInput } from '@/lib/validation/site';
-import { classified, classify, inputsHash, itemDropCase, solveItem, type SolvedFall } from './compute';
+import { classified, inputsHash, itemDropCase, solveItem, type SolvedFall } from './compute';
 
 /**
  * The register's writes that change stored falls. Each solves the falls first, from rows read without locks, and
@@ -90,7 +90,7 @@ export async function updateLevel(organisationId: string, actorUserId: string, l
   return writeLevel(organisationId, actorUserId, levelId, input, presolved(rows.map((r) => [r, { ...r, floor_height_m, surface, water_depth_m }] as const)));
 }
 
-/** A new ladder changes no fall: every item is classified again by the one rule, classify(). */
+/** A new ladder changes no fall: every item is classified again by the one rule, classify() in lib/domain. */
 export async function replaceLadder(organisationId: string, actorUserId: string, input: LadderInput) {
-  return writeLadder(organisationId, actorUserId, input, classify);
+  return writeLadder(organisationId, actorUserId, input);
 }

@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import { MODEL_VERSION, PhysicsInputError, PhysicsSolveError, simulateDrop, type DropCase, type DropResult, type ShapeId } from '@/lib/physics';
 import { fallHeight, type FallSetting, type ItemPhysics, type LadderBound, type ResultColumns } from '@/db/results';
+import { classify } from '@/lib/domain';
 
 export { fallHeight, type FallSetting, type ItemPhysics } from '@/db/results';
 
@@ -46,20 +47,6 @@ function canonical(value: unknown): string {
 /** Identifies the exact inputs of a stored result, model version included, so staleness can be checked. */
 export function inputsHash(dropCase: DropCase): string {
   return createHash('sha256').update(canonical({ model: MODEL_VERSION, case: dropCase })).digest('hex');
-}
-
-/** The level whose bound is the highest at or below the energy; ladders start at 0 J, so there always is one. */
-export function classify(energyJ: number | null, ladder: readonly LadderBound[]): string | null {
-  if (energyJ === null || !Number.isFinite(energyJ)) return null;
-  let found: string | null = null;
-  let bound = -Infinity;
-  for (const level of ladder) {
-    if (level.lower_bound_j <= energyJ && level.lower_bound_j > bound) {
-      found = level.id;
-      bound = level.lower_bound_j;
-    }
-  }
-  return found;
 }
 
 export type ComputedResult = ResultColumns;

@@ -20,7 +20,7 @@ const PRESET_KEYS: Record<string, readonly string[]> = {
 };
 const CUSTOM_KEYS = ['density_kg_m3', 'viscosity_pa_s', 'phase'];
 
-export const mediumSchema = z
+const mediumSchema = z
   .strictObject({
     preset: z.enum(['isa', 'seawater', 'freshwater']).optional(),
     altitude_m: finite().optional(),
@@ -60,7 +60,7 @@ export const mediumSchema = z
     }
   });
 
-export const objectSchema = z.strictObject({
+const objectSchema = z.strictObject({
   mass_kg: positive(),
   cd: nonNegative().optional(),
   area_m2: positive().optional(),
@@ -71,7 +71,7 @@ export const objectSchema = z.strictObject({
   dimensions_m: z.record(z.string(), positive()).optional(),
 });
 
-export const layerSchema = z.strictObject({
+const layerSchema = z.strictObject({
   medium: mediumSchema,
   thickness_m: positive(),
   flow_m_s: finite().optional(),
@@ -108,8 +108,6 @@ export const dropCaseSchema = baseSchema
       ctx.addIssue({ code: 'custom', path: fieldPath(e.field), message: e.detail });
     }
   });
-
-export type DropCaseInput = z.input<typeof baseSchema>;
 
 /** Zod issues as `[{ path: 'object.mass_kg', message: '...' }]`, the project's field-error shape. */
 export function dropCaseIssues(error: z.ZodError): FieldIssue[] {

@@ -1,35 +1,38 @@
-import { create, unitDependencies } from 'mathjs';
 import type { Quantity, UnitSystem } from '@/lib/domain/units';
 
 export type { Quantity };
 
-// Conversions go through mathjs's unit system (its definitions are the exact ones of NIST SP 811), not a table of ours.
-const math = create({ unitDependencies });
+// Exact definitions of NIST SP 811 (2008), Appendix B: every US customary unit here is built from these four.
+const FT = 0.3048; // m
+const LB = 0.45359237; // kg
+const LBF = LB * 9.80665; // N: a pound-force is a pound under standard gravity
+const DEG_F = 5 / 9; // K (a temperature difference)
 
 interface UnitPair {
-  /** mathjs unit names */
-  si: string;
-  us: string;
+  /** One US customary unit in SI. */
+  factor: number;
+  /** The US customary reading at SI zero: only the Fahrenheit scale starts elsewhere (0 °C = 32 °F). */
+  usAtSiZero?: number;
   /** What the page prints */
   siLabel: string;
   usLabel: string;
 }
 
 export const QUANTITIES: Record<Quantity, UnitPair> = {
-  length: { si: 'm', us: 'ft', siLabel: 'm', usLabel: 'ft' },
-  mass: { si: 'kg', us: 'lb', siLabel: 'kg', usLabel: 'lb' },
-  time: { si: 's', us: 's', siLabel: 's', usLabel: 's' },
-  speed: { si: 'm/s', us: 'ft/s', siLabel: 'm/s', usLabel: 'ft/s' },
-  energy: { si: 'J', us: 'ft lbf', siLabel: 'J', usLabel: 'ft·lbf' },
-  momentum: { si: 'kg m/s', us: 'lb ft/s', siLabel: 'kg·m/s', usLabel: 'lb·ft/s' },
-  area: { si: 'm^2', us: 'ft^2', siLabel: 'm²', usLabel: 'ft²' },
-  volume: { si: 'm^3', us: 'ft^3', siLabel: 'm³', usLabel: 'ft³' },
-  density: { si: 'kg/m^3', us: 'lb/ft^3', siLabel: 'kg/m³', usLabel: 'lb/ft³' },
-  viscosity: { si: 'Pa s', us: 'lb/(ft s)', siLabel: 'Pa·s', usLabel: 'lb/(ft·s)' },
-  linearDrag: { si: 'kg/s', us: 'lb/s', siLabel: 'kg/s', usLabel: 'lb/s' },
-  acceleration: { si: 'm/s^2', us: 'ft/s^2', siLabel: 'm/s²', usLabel: 'ft/s²' },
-  temperature: { si: 'degC', us: 'degF', siLabel: '°C', usLabel: '°F' },
-  temperatureDelta: { si: 'K', us: 'degR', siLabel: '°C', usLabel: '°F' },
+  length: { factor: FT, siLabel: 'm', usLabel: 'ft' },
+  mass: { factor: LB, siLabel: 'kg', usLabel: 'lb' },
+  time: { factor: 1, siLabel: 's', usLabel: 's' },
+  speed: { factor: FT, siLabel: 'm/s', usLabel: 'ft/s' },
+  energy: { factor: FT * LBF, siLabel: 'J', usLabel: 'ft·lbf' },
+  momentum: { factor: LB * FT, siLabel: 'kg·m/s', usLabel: 'lb·ft/s' },
+  area: { factor: FT ** 2, siLabel: 'm²', usLabel: 'ft²' },
+  volume: { factor: FT ** 3, siLabel: 'm³', usLabel: 'ft³' },
+  density: { factor: LB / FT ** 3, siLabel: 'kg/m³', usLabel: 'lb/ft³' },
+  viscosity: { factor: LB / FT, siLabel: 'Pa·s', usLabel: 'lb/(ft·s)' },
+  linearDrag: { factor: LB, siLabel: 'kg/s', usLabel: 'lb/s' },
+  acceleration: { factor: FT, siLabel: 'm/s²', usLabel: 'ft/s²' },
+  temperature: { factor: DEG_F, usAtSiZero: 32, siLabel: '°C', usLabel: '°F' },
+  temperatureDelta: { factor: DEG_F, siLabel: '°C', usLabel: '°F' },
 };
 
 export function unitLabel(quantity: Quantity, system: UnitSystem): string {
@@ -40,15 +43,15 @@ export function unitLabel(quantity: Quantity, system: UnitSystem): string {
 /** A value typed in the user's unit system, in SI. */
 export function toSI(quantity: Quantity, value: number, system: UnitSystem): number {
   if (system === 'si' || !Number.isFinite(value)) return value;
-  const pair = QUANTITIES[quantity];
-  return math.unit(value, pair.us).toNumber(pair.si);
+  const { factor, usAtSiZero = 0 } = QUANTITIES[quantity];
+  return (value - usAtSiZero) * factor;
 }
 
 /** An SI value in the user's unit system. */
 export function fromSI(quantity: Quantity, value: number, system: UnitSystem): number {
   if (system === 'si' || !Number.isFinite(value)) return value;
-  const pair = QUANTITIES[quantity];
-  return math.unit(value, pair.si).toNumber(pair.us);
+  const { factor, usAtSiZero = 0 } = QUANTITIES[quantity];
+  return value / factor + usAtSiZero;
 }
 
 /** Significant figures, without exponent notation for the magnitudes a site sees. */

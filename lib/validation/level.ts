@@ -3,7 +3,7 @@ import { SURFACES, type UnitSystem } from '@/lib/domain';
 import { enumField, quantityField, textField } from './quantity';
 import { WATER_DEPTH } from './site';
 
-export const FLOOR_HEIGHT = { label: 'Floor height', quantity: 'length', min: 0, max: 10_000 } as const;
+const FLOOR_HEIGHT = { label: 'Floor height', quantity: 'length', min: 0, max: 10_000 } as const;
 
 /** A level or work area of a site: how high its floor stands above the surface an object would hit. */
 export function levelSchema(units: UnitSystem) {

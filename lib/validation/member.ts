@@ -14,7 +14,5 @@ export const inviteMemberSchema = z.object({
 export type InviteMemberInput = z.infer<typeof inviteMemberSchema>;
 
 export const changeRoleSchema = z.object({ userId, role });
-export type ChangeRoleInput = z.infer<typeof changeRoleSchema>;
 
 export const removeMemberSchema = z.object({ userId });
-export type RemoveMemberInput = z.infer<typeof removeMemberSchema>;

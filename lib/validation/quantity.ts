@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { Quantity, QuantityRule, UnitSystem } from '@/lib/domain';
+import type { QuantityRule, UnitSystem } from '@/lib/domain';
 import { formatNumber, fromSI, toSI, unitLabel } from '@/lib/units';
 import { NOT_A_NUMBER, readNumberText } from '@/lib/units/number-text';
 import { storableText } from './text';

@@ -7,7 +7,7 @@ import { startSession } from '@/lib/auth';
 import { UnavailableError } from '@/lib/errors';
 import type { DropCase } from '@/lib/physics';
 import { dropCaseSchema } from '@/lib/schemas/drop-case';
-import { createOrg, ctx, jsonRequest, resetDatabase, signOutLocally } from './harness';
+import { createOrg, ctx, resetDatabase, signOutLocally } from './harness';
 import { requestContext } from './harness/context';
 
 // Counts every solve on this thread: the route must leave them all to the worker threads. The reference results

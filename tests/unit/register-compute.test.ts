@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { classify, computeItem, inputsHash, itemDropCase, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
+import { classify } from '@/lib/domain';
+import { computeItem, inputsHash, itemDropCase, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
 import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { itemSchema } from '@/lib/validation/item';
 import { ladderSchema } from '@/lib/validation/consequence-level';
