@@ -10,7 +10,7 @@ import { POST as postItem } from '@/app/api/v1/sites/[id]/items/route';
 import { POST as importItemsRoute } from '@/app/api/v1/sites/[id]/items/import/route';
 import { listSites } from '@/db/sites';
 import { startSession } from '@/lib/auth';
-import { itemsTemplateCsv } from '@/lib/register/csv';
+import { itemsTemplateCsv } from '@/lib/register/csv-write';
 import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { requestContext } from './harness/context';
 import { createOrg, ctx, PASSWORD, resetDatabase, signOutLocally, type OrgFixture } from './harness';
