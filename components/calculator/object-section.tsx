@@ -3,7 +3,8 @@
 import { DIMENSION_LABELS, SHAPE_LABELS } from '@/lib/domain';
 import { dimensionsOf, SHAPE_CHOICES } from '@/lib/shape-choice';
 import { SelectField } from '@/components/forms/fields';
-import { massSI, toDropCase, type CalculatorValues } from '@/lib/calculator/form';
+import { massSI, toDropCase } from '@/lib/calculator/drop-case';
+import type { CalculatorValues } from '@/lib/calculator/values';
 import { MATERIALS, material } from '@/lib/materials';
 import { resolveDropCase } from '@/lib/physics';
 import { formatQuantity } from '@/lib/units';
