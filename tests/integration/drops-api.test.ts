@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { POST as postDrops } from '@/app/api/v1/drops/route';
 import { startSession } from '@/lib/auth';
+import { VERIFICATION_THRESHOLD } from '@/lib/physics';
 import { createOrg, ctx, jsonRequest, resetDatabase, signOutLocally } from './harness';
 
 async function post(body: unknown) {
@@ -37,7 +38,7 @@ describe('POST /api/v1/drops', () => {
     // EN 397 shock absorption test: 5.0 kg striker falling 1 m, 49.0 J at g = 9.81 (here the standard 9.80665).
     const { json } = await post({ object: { mass_kg: 5 }, drag_model: 'none', medium: { preset: 'isa' }, release: { height_m: 1 } });
     expect(json.impact_energy_j).toBeCloseTo(5 * 9.80665 * 1, 9);
-    expect(json.closed_form_rel_deviation).toBeLessThan(1e-6);
+    expect(json.closed_form_rel_deviation).toBeLessThan(VERIFICATION_THRESHOLD);
   });
 
   it('answers an array of 100 cases with 100 results in order', async () => {
