@@ -1,7 +1,9 @@
 import { z } from 'zod';
 import { CALCULATOR_RULES, type CalculatorRuleKey, type UnitSystem } from '@/lib/domain';
 import { MATERIAL_IDS, material, type MaterialId } from '@/lib/materials';
-import { DRAG_MODELS, shapeProperties, type DragModel, type DropCase } from '@/lib/physics';
+import type { DropCase } from '@/lib/physics';
+import { DRAG_MODELS, type DragModel } from '@/lib/physics/drag';
+import { shapeProperties } from '@/lib/physics/shapes';
 import { SHAPE_CHOICES, dimensionsOf, type ShapeChoice } from '@/lib/shape-choice';
 import { fromSI, toSI } from '@/lib/units';
 import { readNumberText, writeNumberText } from '@/lib/units/number-text';
