@@ -5,7 +5,8 @@
 import numeric from 'numeric';
 import { closedFormFall, simulateDrop, type DropCase } from '@/lib/physics';
 import { dp45Fall, type FastFallParams } from '@/lib/physics/rk45';
-import { dropZoneStatistics, REFERENCE_DROP_ZONE } from '@/lib/physics/sampling';
+import { dropZoneStatistics } from '@/lib/physics/sampling';
+import { REFERENCE_DROP_ZONE } from './reference-drop-zone';
 import { cliFigures } from './cli';
 
 function median(values: number[]): number {

@@ -1,4 +1,4 @@
-import { SHAPE_IDS, shapeDimensions, type ShapeId } from '@/lib/physics';
+import { SHAPE_IDS, shapeDimensions, type ShapeId } from '@/lib/physics/shapes';
 import type { DimensionKey } from '@/lib/domain/shapes';
 
 /** What a form or CSV row may name as the shape: a catalogue shape, or "direct" with C_d, area and volume typed. */

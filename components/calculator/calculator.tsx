@@ -86,7 +86,7 @@ function CalculatorBody({ initial, canRegister }: { initial: CalculatorValues; c
           <span className="text-sm font-semibold text-ink-soft">Units</span>
           <UnitSwitch value={values.units} onChange={switchUnits} />
         </div>
-        <ObjectSection form={form} values={values} />
+        <ObjectSection form={form} values={values} object={dropCase && query.data && !query.error ? query.data.result.object : null} />
         <PathSection form={form} values={values} />
         <ReleaseSection form={form} values={values} />
         {canRegister && dropCase ? (

@@ -2,7 +2,6 @@
 
 import type { Data } from 'plotly.js';
 import type { UnitSystem } from '@/lib/domain';
-import { closedFormSpeedCurve } from '@/lib/calculator/closed-form-curve';
 import type { DropCase, DropResult } from '@/lib/physics';
 import { REFERENCE_ENERGIES } from '@/lib/domain/reference-energies';
 import { formatQuantity, fromSI, unitLabel } from '@/lib/units';
@@ -22,11 +21,11 @@ const axis = (title: string, extra: object = {}) => ({
   ...extra,
 });
 
-export function SpeedPlot({ result, dropCase, units }: Props) {
+export function SpeedPlot({ result, units }: Props) {
   const s = result.samples;
   if (!s) return null;
   const v = (x: number) => fromSI('speed', x, units);
-  const closed = closedFormSpeedCurve(dropCase, s.t);
+  const closed = s.closed_form_speed;
   const data: Data[] = [
     { x: s.t, y: s.speed.map(v), name: 'Integrated', mode: 'lines', line: { color: C.cord, width: 3 } },
   ];

@@ -3,30 +3,26 @@
 import { DIMENSION_LABELS, SHAPE_LABELS } from '@/lib/domain';
 import { dimensionsOf, SHAPE_CHOICES } from '@/lib/shape-choice';
 import { SelectField } from '@/components/forms/fields';
-import { massSI, toDropCase } from '@/lib/calculator/drop-case';
 import type { CalculatorValues } from '@/lib/calculator/values';
 import { MATERIALS, material } from '@/lib/materials';
-import { resolveDropCase } from '@/lib/physics';
+import type { ResolvedObject } from '@/lib/physics';
 import { formatQuantity } from '@/lib/units';
 import { CalcNumber, ChoiceRow, Section, type CalcForm } from './field-helpers';
 
 const SHAPE_OPTIONS = SHAPE_CHOICES.map((value) => ({ value, label: SHAPE_LABELS[value] }));
 const MATERIAL_OPTIONS = MATERIALS.map((m) => ({ value: m.id, label: `${m.label} (${m.density_kg_m3} kg/m³)` }));
 
-/** Area, volume and C_d the chosen shape gives, or null while its dimensions are incomplete. */
-function preview(values: CalculatorValues) {
-  try {
-    const c = resolveDropCase(toDropCase(values));
-    return { object: c.object, mass: massSI(values) };
-  } catch {
-    return null;
-  }
+interface Props {
+  form: CalcForm;
+  values: CalculatorValues;
+  /** Mass, area, volume and C_d as the server resolved them for the last computed case; null until there is one. */
+  object: ResolvedObject | null;
 }
 
-export function ObjectSection({ form, values }: { form: CalcForm; values: CalculatorValues }) {
+export function ObjectSection({ form, values, object }: Props) {
   const units = values.units;
   const dims = dimensionsOf(values.shape);
-  const p = preview(values);
+  const p = object ? { object, mass: object.mass_kg } : null;
   const direct = values.shape === 'direct';
   const mat = material(values.material);
   const shapeError = form.formState.errors.shape?.message;

@@ -1,6 +1,8 @@
 import type { CalculatorRuleKey } from '@/lib/domain';
 import { material } from '@/lib/materials';
-import { shapeProperties, type DragModel, type DropCase } from '@/lib/physics';
+import type { DropCase } from '@/lib/physics';
+import type { DragModel } from '@/lib/physics/drag';
+import { shapeProperties } from '@/lib/physics/shapes';
 import { dimensionsOf } from '@/lib/shape-choice';
 import { checkNumber } from './schema';
 import type { CalculatorValues } from './values';

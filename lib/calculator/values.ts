@@ -1,6 +1,6 @@
 import type { UnitSystem } from '@/lib/domain';
 import type { MaterialId } from '@/lib/materials';
-import { DRAG_MODELS, type DragModel } from '@/lib/physics';
+import { DRAG_MODELS, type DragModel } from '@/lib/physics/drag';
 import type { ShapeChoice } from '@/lib/shape-choice';
 
 /**

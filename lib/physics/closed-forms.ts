@@ -47,6 +47,23 @@ export function closedFormFall(p: ClosedFormParams): ClosedFormFall | null {
   return linearQuadraticFall(p.height_m, p.vy0, p.gravity, beta, kappa);
 }
 
+/**
+ * Speed against time for a release from rest in still fluid, where a closed form for the whole history is
+ * textbook: vacuum v = G·t, linear drag v = v_t·(1 − e^(−β·t)) with v_t = G/β, quadratic drag v = v_t·tanh(G·t/v_t)
+ * with v_t = √(G/κ). Null for a thrown release, a cross flow, a floating body or both drag terms at once.
+ */
+export function closedFormSpeeds(p: ClosedFormParams, times: readonly number[]): number[] | null {
+  const { gravity: G, linear_per_s: beta, quadratic_per_m: kappa } = p;
+  if (p.vx0 !== 0 || p.vy0 !== 0 || p.flow_m_s !== 0 || !(G > 0)) return null;
+  if (beta === 0 && kappa === 0) return times.map((t) => G * t);
+  if (kappa === 0) return times.map((t) => (G / beta) * -Math.expm1(-beta * t));
+  if (beta === 0) {
+    const vt = Math.sqrt(G / kappa);
+    return times.map((t) => vt * Math.tanh((G * t) / vt));
+  }
+  return null;
+}
+
 export function vacuumFall(h: number, vx0: number, vy0: number, g: number): ClosedFormFall {
   const root = Math.sqrt(vy0 * vy0 + 2 * g * h);
   // The second form avoids cancellation for a fast downward throw.

@@ -7,9 +7,8 @@ import type { Medium } from './media';
  * Keeping every law in this family lets one right-hand side, one terminal-speed formula and
  * one energy audit serve them all.
  */
-export type DragModel = 'none' | 'linear' | 'quadratic' | 'linear_quadratic';
-
-export const DRAG_MODELS: readonly DragModel[] = ['none', 'linear', 'quadratic', 'linear_quadratic'];
+export const DRAG_MODELS = ['none', 'linear', 'quadratic', 'linear_quadratic'] as const;
+export type DragModel = (typeof DRAG_MODELS)[number];
 
 export interface DragCoefficients {
   readonly linear_kg_s: number;
@@ -79,10 +78,4 @@ export function terminalSpeed(drag: DragCoefficients, netWeightN: number): numbe
   if (c > 0) return (2 * netWeightN) / (b + Math.sqrt(b * b + 4 * c * netWeightN));
   if (b > 0) return netWeightN / b;
   return Infinity;
-}
-
-/** Drag force on a body moving at velocity u relative to the medium, N. */
-export function dragForce(drag: DragCoefficients, ux: number, uy: number): [number, number] {
-  const k = drag.linear_kg_s + drag.quadratic_kg_m * Math.hypot(ux, uy);
-  return [-k * ux, -k * uy];
 }

@@ -1,6 +1,6 @@
-import { resolveDropCase, type DropCase, type ResolvedCase, type ResolvedLayer } from './case';
+import { resolveDropCase, type DropCase, type ResolvedCase, type ResolvedLayer, type ResolvedObject } from './case';
 import { reynoldsRegime, regimeMismatch, relativeDeviation, verify, type ReynoldsRegime, type Verification } from './classification';
-import { closedFormFall } from './closed-forms';
+import { closedFormFall, closedFormSpeeds, type ClosedFormParams } from './closed-forms';
 import { MAX_SAMPLES, MODEL_VERSION, VERIFICATION_THRESHOLD } from './constants';
 import { PhysicsInputError, PhysicsSolveError, requireInteger } from './errors';
 import {
@@ -73,6 +73,8 @@ export interface DropSamples {
   readonly v_x: number[];
   readonly v_y: number[];
   readonly speed: number[];
+  /** Speed at the same times from the closed form (lib/physics/closed-forms.ts), where one exists for the whole fall. */
+  readonly closed_form_speed: number[] | null;
 }
 
 export interface EnergyAudit {
@@ -87,6 +89,8 @@ export interface EnergyAudit {
 
 export interface DropResult {
   readonly model_version: string;
+  /** The object as the model used it: given values, or the shape catalogue's with their ranges and sources. */
+  readonly object: ResolvedObject;
   /** False when the object floats in a layer and never reaches the bottom. */
   readonly sinks: boolean;
   readonly fall_time_s: number;
@@ -206,6 +210,7 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
   const layers = layerReports(c, runs);
   const result: DropResult = {
     model_version: MODEL_VERSION,
+    object: c.object,
     sinks: floatsIn === null,
     fall_time_s: t,
     impact_speed_m_s: speed,
@@ -232,7 +237,12 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
   };
   const extras: { energy_audit?: EnergyAudit; samples?: DropSamples } = {};
   if (opts.energyAudit) extras.energy_audit = energyAudit(c, runs);
-  if (sampleCount > 0) extras.samples = sampleRuns(runs, t, state, sampleCount);
+  if (sampleCount > 0) {
+    const samples = sampleRuns(runs, t, state, sampleCount);
+    // One medium only: the closed forms know no layer boundary.
+    const closedSpeed = c.layers.length === 1 ? closedFormSpeeds(closedFormParams(c), samples.t) : null;
+    extras.samples = { ...samples, closed_form_speed: closedSpeed };
+  }
   const full = { ...result, ...extras };
   requireFiniteResult(full, 'result');
   return full;
@@ -255,10 +265,11 @@ function requireFiniteResult(value: object, path: string): void {
   }
 }
 
-function closedFormFor(c: ResolvedCase) {
+/** The first layer's equation of motion per unit inertial mass, as the closed forms take it. */
+function closedFormParams(c: ResolvedCase): ClosedFormParams {
   const l = c.layers[0];
   const M = l.inertial_mass_kg;
-  return closedFormFall({
+  return {
     height_m: c.height_m,
     vx0: c.release_velocity[0],
     vy0: c.release_velocity[1],
@@ -266,7 +277,11 @@ function closedFormFor(c: ResolvedCase) {
     linear_per_s: l.drag.linear_kg_s / M,
     quadratic_per_m: l.drag.quadratic_kg_m / M,
     flow_m_s: l.flow_m_s,
-  });
+  };
+}
+
+function closedFormFor(c: ResolvedCase) {
+  return closedFormFall(closedFormParams(c));
 }
 
 /**
@@ -561,8 +576,8 @@ function energyAudit(c: ResolvedCase, runs: LayerRun[]): EnergyAudit {
 }
 
 /** Samples evenly spaced in time, read from the dense output of a replay of the same steps. */
-function sampleRuns(runs: LayerRun[], tEnd: number, sEnd: number[], count: number): DropSamples {
-  const out: DropSamples = { t: [], x: [], y: [], v_x: [], v_y: [], speed: [] };
+function sampleRuns(runs: LayerRun[], tEnd: number, sEnd: number[], count: number): Omit<DropSamples, 'closed_form_speed'> {
+  const out: Omit<DropSamples, 'closed_form_speed'> = { t: [], x: [], y: [], v_x: [], v_y: [], speed: [] };
   const push = (t: number, x: number, y: number, vx: number, vy: number) => {
     out.t.push(t);
     out.x.push(x);

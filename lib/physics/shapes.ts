@@ -36,7 +36,6 @@ export interface ShapeProperties {
 
 interface ShapeDefinition {
   readonly dimensions: readonly string[];
-  readonly description: string;
   evaluate(d: Record<string, number>, massKg: number): Omit<ShapeProperties, 'shape'>;
 }
 
@@ -86,7 +85,7 @@ const HUMAN_BODY_DENSITY = 985;
 const SHAPES: Record<ShapeId, ShapeDefinition> = {
   sphere: {
     dimensions: ['diameter'],
-    description: 'smooth sphere',
+    // Smooth sphere.
     evaluate: ({ diameter: d }) => ({
       area_m2: (Math.PI * d * d) / 4,
       volume_m3: (Math.PI * d * d * d) / 6,
@@ -101,7 +100,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   cube_face_on: {
     dimensions: ['side'],
-    description: 'cube falling with a face normal to the flow',
+    // Cube falling with a face normal to the flow.
     evaluate: ({ side: a }) => ({
       area_m2: a * a,
       volume_m3: a * a * a,
@@ -115,7 +114,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   cube_edge_on: {
     dimensions: ['side'],
-    description: 'cube falling with an edge leading (rotated 45° about a horizontal axis)',
+    // Cube falling with an edge leading (rotated 45° about a horizontal axis).
     evaluate: ({ side: a }) => ({
       area_m2: Math.SQRT2 * a * a,
       volume_m3: a * a * a,
@@ -129,7 +128,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   cylinder_side_on: {
     dimensions: ['length', 'diameter'],
-    description: 'circular cylinder falling with its axis horizontal',
+    // Circular cylinder falling with its axis horizontal.
     evaluate: ({ length: l, diameter: d }) => ({
       area_m2: l * d,
       volume_m3: (Math.PI * d * d * l) / 4,
@@ -143,7 +142,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   cylinder_end_on: {
     dimensions: ['length', 'diameter'],
-    description: 'circular cylinder falling with its axis vertical',
+    // Circular cylinder falling with its axis vertical.
     evaluate: ({ length: l, diameter: d }) => ({
       area_m2: (Math.PI * d * d) / 4,
       volume_m3: (Math.PI * d * d * l) / 4,
@@ -159,7 +158,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   flat_plate: {
     dimensions: ['width', 'height', 'thickness'],
-    description: 'thin rectangular plate falling flat (normal to the flow)',
+    // Thin rectangular plate falling flat (normal to the flow).
     evaluate: ({ width, height, thickness }) => {
       const a = Math.min(width, height);
       const b = Math.max(width, height);
@@ -178,7 +177,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   disc: {
     dimensions: ['diameter', 'thickness'],
-    description: 'thin disc falling flat',
+    // Thin disc falling flat.
     evaluate: ({ diameter: d, thickness: t }) => {
       const volume = (Math.PI * d * d * t) / 4;
       return {
@@ -196,7 +195,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   long_bar: {
     dimensions: ['length', 'width'],
-    description: 'slender bar of square section (tube, rebar, scaffold member) falling broadside',
+    // Slender bar of square section (tube, rebar, scaffold member) falling broadside.
     evaluate: ({ length: l, width: a }) => ({
       area_m2: l * a,
       volume_m3: l * a * a,
@@ -214,7 +213,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   tumbling_box: {
     dimensions: ['length', 'width', 'height'],
-    description: 'box tumbling as it falls (orientation unknown)',
+    // Box tumbling as it falls (orientation unknown).
     evaluate: ({ length: l, width: w, height: h }) => ({
       area_m2: (2 * (l * w + w * h + h * l)) / 4,
       volume_m3: l * w * h,
@@ -232,7 +231,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   person_horizontal: {
     dimensions: ['height', 'breadth'],
-    description: 'person falling face-down, spread (area of the ellipse inscribed in height × breadth)',
+    // Person falling face-down, spread (area of the ellipse inscribed in height × breadth).
     evaluate: ({ height, breadth }, mass) => ({
       area_m2: (Math.PI / 4) * height * breadth,
       volume_m3: mass / HUMAN_BODY_DENSITY,
@@ -246,7 +245,7 @@ const SHAPES: Record<ShapeId, ShapeDefinition> = {
   },
   person_feet_first: {
     dimensions: ['breadth', 'depth'],
-    description: 'person falling upright (area of the ellipse inscribed in breadth × depth)',
+    // Person falling upright (area of the ellipse inscribed in breadth × depth).
     evaluate: ({ breadth, depth }, mass) => ({
       area_m2: (Math.PI / 4) * breadth * depth,
       volume_m3: mass / HUMAN_BODY_DENSITY,
@@ -268,10 +267,6 @@ export function isShapeId(value: unknown): value is ShapeId {
 
 export function shapeDimensions(shape: ShapeId): readonly string[] {
   return SHAPES[shape].dimensions;
-}
-
-export function shapeDescription(shape: ShapeId): string {
-  return SHAPES[shape].description;
 }
 
 /**

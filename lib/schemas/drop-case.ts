@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DRAG_MODELS, MAX_SAMPLES, PhysicsInputError, resolveDropCase, SHAPE_IDS, type DragModel, type DropCase, type MediumSpec, type ShapeId } from '@/lib/physics';
+import { DRAG_MODELS, MAX_SAMPLES, PhysicsInputError, resolveDropCase, SHAPE_IDS, type DropCase, type MediumSpec, type ShapeId } from '@/lib/physics';
 import { toFieldIssues, type FieldIssue } from '@/lib/validation/issues';
 
 /**
@@ -79,7 +79,7 @@ const layerSchema = z.strictObject({
 
 const baseSchema = z.strictObject({
   object: objectSchema,
-  drag_model: z.enum(DRAG_MODELS as [DragModel, ...DragModel[]]),
+  drag_model: z.enum(DRAG_MODELS),
   medium: mediumSchema.optional(),
   release: z
     .strictObject({

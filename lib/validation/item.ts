@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { DIMENSIONS, ITEM_CATEGORIES, REGISTER_RULES, SECURING, type UnitSystem } from '@/lib/domain';
 import { dimensionsOf, SHAPE_CHOICES, type ShapeChoice } from '@/lib/shape-choice';
-import { PhysicsInputError, shapeProperties } from '@/lib/physics';
+import { PhysicsInputError } from '@/lib/physics/errors';
+import { shapeProperties } from '@/lib/physics/shapes';
 import { uuidField } from './ids';
 import { enumField, quantityField, textField } from './quantity';
 

@@ -2,7 +2,7 @@
 """Independent reference for the drop-zone statistics test, solved with SciPy.
 
 Writes tests/unit/physics/fixtures/scipy-drop-zone.json: the landing-distance percentiles of the
-project's reference drop zone (lib/physics/sampling.ts, REFERENCE_DROP_ZONE: 2 kg, A 0.01 m²,
+project's reference drop zone (bench/reference-drop-zone.ts, REFERENCE_DROP_ZONE: 2 kg, A 0.01 m²,
 rho 1.225 kg/m³, 50 m, C_d uniform 0.8-1.3, wind uniform 0-15 m/s, horizontal release speed
 uniform 0-2 m/s, 10,000 draws, seed 12345). The draws come from Mulberry32, ported here from
 its public-domain definition so the same seed gives the same draws in the same order (C_d,

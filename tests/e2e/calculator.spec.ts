@@ -51,6 +51,13 @@ test('a steel box dropped 30 m in a 10 m/s wind, in SI and US units, shared by l
   await expect(second.getByTestId('drift')).toContainText(formatNumber(Math.abs(expected.drift_m), 3));
   await second.close();
 
+  // In still air from rest a closed form covers the fall, and the server's answer carries its curve for the plot.
+  await page.getByLabel('Wind speed').fill('0');
+  await expect(page.getByTestId('verification')).not.toContainText('No closed form covers this case');
+  await expect(page.locator('.js-plotly-plot').getByText('Closed form', { exact: true })).toBeVisible();
+  await expect(page.getByLabel('Object properties')).toContainText('0.055 m²');
+  await screens(page, 'calculator-still-air');
+
   await page.getByLabel('Mass known').check();
   await page.getByRole('textbox', { name: /^Mass \(/ }).fill('-3');
   await expect(page.getByText('Mass must be greater than 0 kg.')).toBeVisible();

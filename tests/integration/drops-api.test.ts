@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { POST as postDrops } from '@/app/api/v1/drops/route';
 import { startSession } from '@/lib/auth';
+import { closedFormSpeeds, VERIFICATION_THRESHOLD } from '@/lib/physics';
 import { createOrg, ctx, jsonRequest, resetDatabase, signOutLocally } from './harness';
 
 async function post(body: unknown) {
@@ -33,11 +34,32 @@ describe('POST /api/v1/drops', () => {
     expect(json.verification.passed).toBe(true);
   });
 
+  it('carries the object and the closed-form speed curve of lib/physics/closed-forms.ts for the same skydiver', async () => {
+    // OpenStax College Physics, Example 5.2 again: v = v_t·tanh(g·t/v_t) with the published v_t of 44 m/s.
+    const { status, json } = await post({
+      object: { mass_kg: 85, cd: 1.0, area_m2: 0.7, volume_m3: 0 },
+      drag_model: 'quadratic',
+      medium: { density_kg_m3: 1.21 },
+      release: { height_m: 3000 },
+      gravity_m_s2: 9.8,
+      samples: 50,
+    });
+    expect(status).toBe(200);
+    expect(json.object).toMatchObject({ mass_kg: 85, cd: 1, area_m2: 0.7, volume_m3: 0, shape: null });
+    const { t, closed_form_speed: curve } = json.samples as { t: number[]; closed_form_speed: number[] };
+    const ref = closedFormSpeeds({ height_m: 3000, vx0: 0, vy0: 0, gravity: 9.8, linear_per_s: 0, quadratic_per_m: (1.21 * 0.7) / (2 * 85), flow_m_s: 0 }, t)!;
+    for (const i of [1, 5, 25, 49]) {
+      expect(curve[i] / ref[i]).toBeCloseTo(1, 12);
+      // Two figures published: within about 1 %.
+      expect(Math.abs(curve[i] - 44 * Math.tanh((9.8 * t[i]) / 44))).toBeLessThan(0.5);
+    }
+  });
+
   it('gives the EN 397 helmet shock-test energy for 5 kg from 1 m in a vacuum', async () => {
     // EN 397 shock absorption test: 5.0 kg striker falling 1 m, 49.0 J at g = 9.81 (here the standard 9.80665).
     const { json } = await post({ object: { mass_kg: 5 }, drag_model: 'none', medium: { preset: 'isa' }, release: { height_m: 1 } });
     expect(json.impact_energy_j).toBeCloseTo(5 * 9.80665 * 1, 9);
-    expect(json.closed_form_rel_deviation).toBeLessThan(1e-6);
+    expect(json.closed_form_rel_deviation).toBeLessThan(VERIFICATION_THRESHOLD);
   });
 
   it('answers an array of 100 cases with 100 results in order', async () => {

@@ -4,7 +4,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { simulateDrop } from '@/lib/physics';
 import { dp45Fall } from '@/lib/physics/rk45';
-import { dropZoneStatistics, mulberry32, percentile, REFERENCE_DROP_ZONE } from '@/lib/physics/sampling';
+import { REFERENCE_DROP_ZONE } from '@/bench/reference-drop-zone';
+import { dropZoneStatistics, mulberry32, percentile } from '@/lib/physics/sampling';
 
 // The 10,000-case drop zone the benchmark times; its reference percentiles come from SciPy (below).
 const spec = REFERENCE_DROP_ZONE;
