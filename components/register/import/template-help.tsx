@@ -1,6 +1,4 @@
-import type { UnitSystem } from '@/lib/domain';
-import { DIMENSIONS } from '@/lib/domain';
-
+import { DIMENSIONS, type UnitSystem } from '@/lib/domain';
 
 /** How to write the file: the templates, required and optional columns, and units in the headers. */
 export function TemplateHelp({ siteId, units, levelNames }: { siteId: string; units: UnitSystem; levelNames: string[] }) {
