@@ -9,7 +9,7 @@ import { createLevel, listLevels } from '@/db/levels';
 import { closeDb } from '@/db/knex';
 import { createSite } from '@/db/sites';
 import { hashPassword } from '@/lib/auth/password';
-import { parseItemsCsv } from '@/lib/register/csv';
+import { parseItemsCsv } from '@/lib/register/csv-import';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';
 import { importItems } from '@/lib/register/commands';

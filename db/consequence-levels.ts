@@ -1,11 +1,9 @@
-import { classify, type ConsequenceLevel } from '@/lib/domain';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
-import type { LadderInput } from '@/lib/validation/consequence-level';
+import { classify, DEFAULT_LADDER, type ConsequenceLevel } from '@/lib/domain';
 import { appendAudit } from './audit';
 import { getDb } from './knex';
 import { lockItems, lockOrganisation } from './locks';
 import type { LadderBound } from './results';
-import type { Conn } from './types';
+import type { Conn, LadderFields } from './types';
 
 const COLUMNS = ['id', 'rank', 'name', 'lower_bound_j', 'colour', 'guidance', 'source'] as const;
 
@@ -45,7 +43,7 @@ async function reclassifyItems(trx: Conn, organisationId: string, ladder: readon
 export async function replaceLadder(
   organisationId: string,
   actorUserId: string,
-  input: LadderInput,
+  input: LadderFields,
   conn: Conn = getDb(),
 ): Promise<{ ladder: ConsequenceLevel[]; reclassified: number }> {
   return conn.transaction(async (trx) => {

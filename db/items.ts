@@ -1,13 +1,11 @@
 import { isUuid, type RegisterRow } from '@/lib/domain';
-import type { RegisterExportRow } from '@/lib/register/csv';
-import type { ItemInput } from '@/lib/validation/item';
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { appendAudit } from './audit';
 import { listLadder } from './consequence-levels';
 import { getDb } from './knex';
 import { lockItems, lockLevel, lockOrganisation, lockSite, lockSiteLevels, siteIdOf } from './locks';
 import { fallHeight, type FallSetting, type ItemPhysics, type ResultColumns, type ResultSource } from './results';
-import type { AuditRow, Conn, ItemRow, LevelRow, SiteRow } from './types';
+import type { AuditRow, Conn, ItemFields, ItemRow, LevelRow, RegisterExportRow, SiteRow } from './types';
 
 /** The stored result's columns, written together whenever an item's fall is computed. */
 export const RESULT_COLUMNS: readonly (keyof ResultColumns)[] = [
@@ -25,7 +23,7 @@ export const RESULT_COLUMNS: readonly (keyof ResultColumns)[] = [
 const RESULT_TYPES = ['float8', 'float8', 'float8', 'float8', 'float8', 'bool', 'uuid', 'text', 'text', 'text'];
 
 /** The input fields an audit entry records: what a person changed, not what the computer derived. */
-function inputFields(item: Partial<ItemRow> | ItemInput) {
+function inputFields(item: Partial<ItemRow> | ItemFields) {
   const { tag, description, category, quantity, mass_kg, shape, dimensions_m, cd, area_m2, volume_m3, level_id, height_m, securing, last_inspected, notes } =
     item as ItemRow;
   return { tag, description, category, quantity, mass_kg, shape, dimensions_m, cd, area_m2, volume_m3, level_id, height_m, securing, last_inspected, notes };
@@ -127,11 +125,11 @@ async function lockItemSite(trx: Conn, organisationId: string, itemId: string): 
   return site;
 }
 
-function toRow(input: ItemInput) {
+function toRow(input: ItemFields) {
   return { ...inputFields(input), dimensions_m: JSON.stringify(input.dimensions_m) };
 }
 
-export async function createItem(organisationId: string, actorUserId: string, siteId: string, input: ItemInput, resultFor: ResultSource, conn: Conn = getDb()): Promise<ItemRow> {
+export async function createItem(organisationId: string, actorUserId: string, siteId: string, input: ItemFields, resultFor: ResultSource, conn: Conn = getDb()): Promise<ItemRow> {
   return conn.transaction(async (trx) => {
     await lockOrganisation(trx, organisationId, 'share');
     const site = await lockSite(trx, organisationId, siteId, 'share');
@@ -147,7 +145,7 @@ export async function createItem(organisationId: string, actorUserId: string, si
   });
 }
 
-export async function updateItem(organisationId: string, actorUserId: string, itemId: string, input: ItemInput, resultFor: ResultSource, conn: Conn = getDb()): Promise<ItemRow> {
+export async function updateItem(organisationId: string, actorUserId: string, itemId: string, input: ItemFields, resultFor: ResultSource, conn: Conn = getDb()): Promise<ItemRow> {
   return conn.transaction(async (trx) => {
     const site = await lockItemSite(trx, organisationId, itemId);
     const setting = await lockedSetting(trx, organisationId, site, input.level_id);
@@ -190,7 +188,7 @@ export async function importItems(
   organisationId: string,
   actorUserId: string,
   siteId: string,
-  inputs: { line: number; item: ItemInput }[],
+  inputs: { line: number; item: ItemFields }[],
   meta: { file_name: string; mode: string; skipped_rows: number },
   resultFor: ResultSource,
   conn: Conn = getDb(),

@@ -1,12 +1,11 @@
 import { ConflictError, NotFoundError } from '@/lib/errors';
 import { isUuid } from '@/lib/domain';
-import type { LevelInput } from '@/lib/validation/level';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';
 import type { ResultSource } from './results';
 import { getDb } from './knex';
 import { lockLevel, lockOrganisation, lockSite, siteIdOf, type LockMode } from './locks';
-import type { Conn, LevelRow } from './types';
+import type { Conn, LevelFields, LevelRow } from './types';
 
 export interface LevelListing extends LevelRow {
   line_count: number;
@@ -17,7 +16,7 @@ function duplicateName(error: unknown, name: string): never {
   throw error;
 }
 
-export function levelColumns(input: LevelInput) {
+export function levelColumns(input: LevelFields) {
   return { name: input.name, floor_height_m: input.floor_height, surface: input.surface, water_depth_m: input.water_depth, notes: input.notes };
 }
 
@@ -50,7 +49,7 @@ export async function findLevel(organisationId: string, siteId: string, levelId:
   return conn<LevelRow>('site_levels').where({ id: levelId, site_id: siteId, organisation_id: organisationId }).first();
 }
 
-export async function createLevel(organisationId: string, actorUserId: string, siteId: string, input: LevelInput, conn: Conn = getDb()): Promise<LevelRow> {
+export async function createLevel(organisationId: string, actorUserId: string, siteId: string, input: LevelFields, conn: Conn = getDb()): Promise<LevelRow> {
   return conn.transaction(async (trx) => {
     await lockOrganisation(trx, organisationId, 'share');
     const site = await lockSite(trx, organisationId, siteId, 'share');
@@ -69,7 +68,7 @@ export async function updateLevel(
   organisationId: string,
   actorUserId: string,
   levelId: string,
-  input: LevelInput,
+  input: LevelFields,
   resultFor: ResultSource,
   conn: Conn = getDb(),
 ): Promise<{ level: LevelRow; recomputed: number }> {

@@ -1,12 +1,11 @@
 import { isUuid } from '@/lib/domain';
 import { NotFoundError, ConflictError } from '@/lib/errors';
-import type { SiteInput } from '@/lib/validation/site';
 import { appendAudit } from './audit';
 import { recomputeItems } from './items';
 import type { ResultSource } from './results';
 import { getDb } from './knex';
 import { lockItems, lockOrganisation, lockSite, lockSiteLevels } from './locks';
-import type { Conn, SiteRow } from './types';
+import type { Conn, SiteFields, SiteRow } from './types';
 
 export interface SiteListing extends SiteRow {
   level_count: number;
@@ -26,7 +25,7 @@ const SITE_FIELDS = ['name', 'kind', 'location', 'surface', 'water_depth_m', 'al
 /** The site fields that change a fall; the rest are descriptions or defaults for new levels. */
 const PHYSICS_FIELDS = ['altitude_m', 'design_wind_m_s', 'current_m_s'] as const;
 
-export function siteColumns(input: SiteInput) {
+export function siteColumns(input: SiteFields) {
   return {
     name: input.name,
     kind: input.kind,
@@ -78,7 +77,7 @@ export async function findSite(organisationId: string, siteId: string, conn: Con
   return conn<SiteRow>('sites').where({ id: siteId, organisation_id: organisationId }).first();
 }
 
-export async function createSite(organisationId: string, actorUserId: string, input: SiteInput, conn: Conn = getDb()): Promise<SiteRow> {
+export async function createSite(organisationId: string, actorUserId: string, input: SiteFields, conn: Conn = getDb()): Promise<SiteRow> {
   return conn.transaction(async (trx) => {
     await lockOrganisation(trx, organisationId, 'share');
     const [site] = await trx<SiteRow>('sites')
@@ -95,7 +94,7 @@ export async function updateSite(
   organisationId: string,
   actorUserId: string,
   siteId: string,
-  input: SiteInput,
+  input: SiteFields,
   resultFor: ResultSource,
   conn: Conn = getDb(),
 ): Promise<{ site: SiteRow; recomputed: number }> {

@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import type { ItemCategory, Role, Securing, SiteKind, StoredResult, Surface, UnitSystem } from '@/lib/domain';
+import type { ConsequenceLevel, ItemCategory, RegisterRow, Role, Securing, SiteKind, StoredResult, Surface, UnitSystem } from '@/lib/domain';
 
 /** A query runs on the pool or inside a caller's transaction. */
 export type Conn = Knex | Knex.Transaction;
@@ -121,4 +121,63 @@ export interface SessionRow {
   last_seen_at: Date;
   expires_at: Date;
   revoked_at: Date | null;
+}
+
+/** A register line with the item inputs the table does not show, so an export can be re-imported. */
+export type RegisterExportRow = RegisterRow & {
+  dimensions_m: Record<string, number>;
+  cd: number | null;
+  area_m2: number | null;
+  volume_m3: number | null;
+  notes: string;
+  height_override_m: number | null;
+};
+
+/*
+ * What the write functions store, in SI with the stored column names where they match. lib/validation's schemas
+ * produce these (their outputs are checked against them where lib/register/commands.ts and the actions call db/),
+ * so the data layer needs no import from the layers above it.
+ */
+export interface SiteFields {
+  name: string;
+  kind: SiteKind;
+  location: string;
+  surface: Surface;
+  water_depth: number | null;
+  altitude: number;
+  design_wind: number;
+  current: number;
+  notes: string;
+}
+
+export interface LevelFields {
+  name: string;
+  floor_height: number;
+  surface: Surface;
+  water_depth: number | null;
+  notes: string;
+}
+
+export interface ItemFields {
+  tag: string;
+  description: string;
+  category: ItemCategory;
+  quantity: number;
+  mass_kg: number;
+  shape: string;
+  dimensions_m: Record<string, number>;
+  cd: number | null;
+  area_m2: number | null;
+  volume_m3: number | null;
+  level_id: string;
+  height_m: number | null;
+  securing: Securing;
+  /** YYYY-MM-DD */
+  last_inspected: string | null;
+  notes: string;
+}
+
+/** A whole ladder, lowest level first; ranks are given by position. */
+export interface LadderFields {
+  levels: Omit<ConsequenceLevel, 'id' | 'rank'>[];
 }

@@ -13,7 +13,10 @@ for (const name of ['vitest.json', 'vitest-http.json']) {
   if (existsSync(vitestFile)) {
     const v = JSON.parse(readFileSync(vitestFile, 'utf8'));
     passed += v.numPassedTests;
-    failed += v.numFailedTests + (v.numFailedTestSuites ?? 0);
+    // A file that failed without a failed test (it did not load, or a hook threw) counts once; vitest's
+    // numFailedTestSuites would count every describe block around a failed test again.
+    const brokenFiles = (v.testResults ?? []).filter((f) => f.status === 'failed' && !(f.assertionResults ?? []).some((a) => a.status === 'failed'));
+    failed += v.numFailedTests + brokenFiles.length;
     skipped += v.numPendingTests + (v.numTodoTests ?? 0);
   } else {
     failed += 1;

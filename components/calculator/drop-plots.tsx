@@ -3,7 +3,7 @@
 import type { Data } from 'plotly.js';
 import type { UnitSystem } from '@/lib/domain';
 import type { DropCase, DropResult } from '@/lib/physics';
-import { REFERENCE_ENERGIES } from '@/lib/reference-energies';
+import { REFERENCE_ENERGIES } from '@/lib/domain/reference-energies';
 import { formatQuantity, fromSI, unitLabel } from '@/lib/units';
 import { PLOT_COLOURS as C } from './plot-colours';
 import { PlotFrame } from './plot-frame';

@@ -8,7 +8,7 @@ import { useActionForm } from '@/components/forms/use-action-form';
 import { ladderInOrder } from '@/components/register/ladder';
 import { saveLadderAction } from '@/lib/actions/register';
 import type { ActionState } from '@/lib/actions/state';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { writeNumberText } from '@/lib/units/number-text';
 import { formatQuantity } from '@/lib/units';
 import { ladderSchema } from '@/lib/validation/consequence-level';

@@ -1,7 +1,7 @@
 'use client';
 
 import { useCallback, useId, useState } from 'react';
-import { CSV_LIMITS } from '@/lib/register/csv';
+import { CSV_LIMITS } from '@/lib/register/csv-limits';
 import { SafetyNote } from '@/components/layout/safety-note';
 import { buttonStyles } from '@/components/ui/button';
 import { useFileDrop } from '@/components/ui/use-file-drop';

@@ -6,7 +6,7 @@ import { requireRole } from '@/lib/auth';
 import { rolesFor, type Action } from '@/lib/auth/policy';
 import type { UnitSystem } from '@/lib/domain';
 import { ConflictError, NotFoundError, UnavailableError } from '@/lib/errors';
-import { formToObject, unflatten, unsafeInputFailure, UnsafeInputError } from '@/lib/validation/input';
+import { readForm } from '@/lib/validation/input';
 import { toFieldErrors } from '@/lib/validation/issues';
 import { unitsField } from '@/lib/validation/quantity';
 import { outageSafe } from './outage';
@@ -16,8 +16,8 @@ import type { ActionState } from './state';
 export const CHECK_FIELDS = 'Check the highlighted fields.';
 
 /** What an action's body knows besides its parsed input. */
-export interface ActionContext {
-  member: Member;
+export interface ActionContext<A extends Allow = Action> {
+  member: A extends 'public' ? null : Member;
   /** The form's text fields as posted (null prototype), for ids and other names outside the schema. */
   fields: Record<string, string>;
   /** The unit system the form's numbers were typed in ("units" field; SI when absent or unknown). */
@@ -30,9 +30,14 @@ export interface Outcome extends ActionState {
   redirect?: string;
 }
 
-interface ActionSpec<S extends z.ZodType> {
-  /** Who may run it: an action of lib/auth/policy.ts, or 'any' signed-in member. Checked before the form is read. */
-  allow: Action | 'any';
+type Allow = Action | 'any' | 'public';
+
+interface ActionSpec<S extends z.ZodType, A extends Allow> {
+  /**
+   * Who may run it: an action of lib/auth/policy.ts, or 'any' signed-in member, checked before the form is read; or
+   * 'public' for the two forms a signed-out visitor may post (sign-in, sign-up), whose context has no member.
+   */
+  allow: A;
   /** The entity's schema, or a function of the unit system for schemas that read typed quantities. */
   schema?: S | ((units: UnitSystem) => S);
   /** Dotted field names ("dimensions.length", "levels.0.name") become nested objects and lists before parsing. */
@@ -40,8 +45,8 @@ interface ActionSpec<S extends z.ZodType> {
   /** Shapes the read form before the schema sees it (e.g. a ladder form with no rungs posts no "levels"). */
   prepare?: (values: Record<string, unknown>) => unknown;
   /** The message when the thing acted on is gone (NotFoundError); without it a NotFoundError is a fault. */
-  notFound?: string | ((context: ActionContext) => string);
-  run: (input: z.output<S>, context: ActionContext) => Promise<Outcome>;
+  notFound?: string | ((context: ActionContext<A>) => string);
+  run: (input: z.output<S>, context: ActionContext<A>) => Promise<Outcome>;
 }
 
 function known(error: unknown, notFound: string | undefined): ActionState {
@@ -52,25 +57,20 @@ function known(error: unknown, notFound: string | undefined): ActionState {
 }
 
 /**
- * Every server action but sign-in, sign-up and sign-out is built here, in this order: role check (requireRole
- * with the policy's roles, so a visitor without the role reads nothing of the form), read the form through
+ * Every server action that takes a form is built here, in this order: role check (requireRole with the policy's
+ * roles, so a visitor without the role reads nothing of the form), read the form through
  * lib/validation/input (refused field names fail like any field), parse with the schema, run the body, then
  * revalidate and redirect. Known errors become the form's message; a database outage becomes the outage message.
  */
-export function defineAction<S extends z.ZodType = z.ZodUnknown>(spec: ActionSpec<S>) {
-  return outageSafe(async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-    const member = await requireRole(spec.allow === 'any' ? 'any' : rolesFor(spec.allow));
-    let fields: Record<string, string>;
-    let values: Record<string, unknown>;
-    try {
-      fields = formToObject(form);
-      values = spec.nested ? unflatten(fields) : fields;
-    } catch (error) {
-      if (!(error instanceof UnsafeInputError)) throw error;
-      return { errors: toFieldErrors(unsafeInputFailure(error).error), message: CHECK_FIELDS };
-    }
+export function defineAction<S extends z.ZodType = z.ZodUnknown, A extends Allow = Allow>(spec: ActionSpec<S, A>) {
+  const action = async (_prev: ActionState, form: FormData): Promise<ActionState> => {
+    const allow: Allow = spec.allow;
+    const member = allow === 'public' ? null : await requireRole(allow === 'any' ? 'any' : rolesFor(allow));
+    const read = readForm(form, spec.nested);
+    if (!read.success) return { errors: toFieldErrors(read.error), message: CHECK_FIELDS };
+    const { fields, values } = read;
     const units = unitsField.safeParse(fields.units);
-    const context: ActionContext = { member, fields, units: units.success ? units.data : 'si' };
+    const context = { member, fields, units: units.success ? units.data : 'si' } as ActionContext<A>;
 
     let input: z.output<S> = undefined as z.output<S>;
     if (spec.schema) {
@@ -92,5 +92,7 @@ export function defineAction<S extends z.ZodType = z.ZodUnknown>(spec: ActionSpe
     // redirect() throws Next's redirect signal, so it comes last and outside the error mapping.
     if (to) redirect(to);
     return state;
-  });
+  };
+  // Signed-out forms change nothing a member could lose, so an outage there stays the error page it always was.
+  return spec.allow === 'public' ? action : outageSafe(action);
 }

@@ -1,43 +1,36 @@
 'use server';
 
-import { revalidatePath } from 'next/cache';
 import { redirect } from 'next/navigation';
 import { findUserById, updatePasswordHash, updateProfile } from '@/db/users';
 import { endEverySession, endOtherSessions, hashPassword, requireRole, verifyPassword } from '@/lib/auth';
-import { UnavailableError } from '@/lib/errors';
-import { parseForm } from '@/lib/validation/input';
-import { toFieldErrors } from '@/lib/validation/issues';
 import { passwordChangeSchema, profileSchema } from '@/lib/validation/user';
+import { defineAction } from './define';
 import type { ActionState } from './state';
 
-export async function updateProfileAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const me = await requireRole('any');
-  const parsed = parseForm(profileSchema, form);
-  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
-  await updateProfile(me.userId, me.organisationId, parsed.data);
-  revalidatePath('/', 'layout');
-  return { ok: true, message: 'Profile saved.' };
-}
+export const updateProfileAction = defineAction({
+  allow: 'any',
+  schema: profileSchema,
+  run: async (profile, { member: me }) => {
+    await updateProfile(me.userId, me.organisationId, profile);
+    return { ok: true, message: 'Profile saved.', revalidate: ['/', 'layout'] };
+  },
+});
 
-export async function changePasswordAction(_prev: ActionState, form: FormData): Promise<ActionState> {
-  const me = await requireRole('any');
-  const parsed = parseForm(passwordChangeSchema, form);
-  if (!parsed.success) return { errors: toFieldErrors(parsed.error), message: 'Check the highlighted fields.' };
-  const user = await findUserById(me.userId);
-  try {
-    if (!user || !(await verifyPassword(parsed.data.currentPassword, user.password_hash))) {
+export const changePasswordAction = defineAction({
+  allow: 'any',
+  schema: passwordChangeSchema,
+  run: async ({ currentPassword, newPassword }, { member: me }) => {
+    // A full hashing pool throws UnavailableError, which the form shows with when to try again.
+    const user = await findUserById(me.userId);
+    if (!user || !(await verifyPassword(currentPassword, user.password_hash))) {
       return { errors: { currentPassword: 'The current password is not right.' } };
     }
-    await updatePasswordHash(me.userId, me.organisationId, await hashPassword(parsed.data.newPassword));
-  } catch (error) {
-    if (error instanceof UnavailableError) return { message: error.message };
-    throw error;
-  }
-  // Whoever else held a session (a copied cookie, a forgotten device) signs in again, with the new password.
-  await endOtherSessions(me.userId);
-  revalidatePath('/', 'layout');
-  return { ok: true, message: 'Password changed. Other devices are signed out.' };
-}
+    await updatePasswordHash(me.userId, me.organisationId, await hashPassword(newPassword));
+    // Whoever else held a session (a copied cookie, a forgotten device) signs in again, with the new password.
+    await endOtherSessions(me.userId);
+    return { ok: true, message: 'Password changed. Other devices are signed out.', revalidate: ['/', 'layout'] };
+  },
+});
 
 /** Ends every session of this user, this one too, and returns to the sign-in page. */
 export async function signOutEverywhereAction(): Promise<void> {

@@ -6,3 +6,5 @@ export * from './shapes';
 export * from './quantity-rules';
 export * from './ladder';
 export * from './ids';
+export * from './reference-energies';
+export * from './default-ladder';

@@ -110,14 +110,20 @@ export function unsafeInputFailure(error: UnsafeInputError): { success: false; e
   return { success: false, error: new z.ZodError([{ code: 'custom', path: [error.field], message: error.message, input: undefined }]) };
 }
 
-/** `schema.safeParse` of a form's fields: a refused field name fails like any other field, naming it. */
-export function parseForm<S extends z.ZodType>(schema: S, form: unknown): z.ZodSafeParseResult<z.output<S>> {
-  let fields: Record<string, string>;
+/**
+ * A posted form read for a server action: its text fields as posted, and the values its schema parses (nested
+ * when the form uses dotted names). A refused field name comes back as a failure naming that field, in the shape of
+ * a schema's failure, so the action reports it like any other field.
+ */
+export function readForm(
+  form: unknown,
+  nested = false,
+): { success: true; fields: Record<string, string>; values: Record<string, unknown> } | { success: false; error: z.ZodError } {
   try {
-    fields = formToObject(form);
+    const fields = formToObject(form);
+    return { success: true, fields, values: nested ? unflatten(fields) : fields };
   } catch (error) {
-    if (error instanceof UnsafeInputError) return unsafeInputFailure(error) as z.ZodSafeParseResult<z.output<S>>;
+    if (error instanceof UnsafeInputError) return unsafeInputFailure(error);
     throw error;
   }
-  return schema.safeParse(fields);
 }

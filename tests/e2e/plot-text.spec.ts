@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { signUpFresh } from './helpers';
 
 // The probe's payload (issue 9, defect 12): a consequence level named as a link became a live link in every member's

@@ -1,8 +1,8 @@
 import { readFile } from 'node:fs/promises';
 import { expect, test } from './fixtures';
 import { computeItem } from '@/lib/register/compute';
-import { itemsTemplateCsv } from '@/lib/register/csv';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { itemsTemplateCsv } from '@/lib/register/csv-write';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { formatNumber } from '@/lib/units';
 import { signUpFresh } from './helpers';
 import { formsReady, screens } from './screens';

@@ -25,8 +25,8 @@ import { GET as getRegisterCsv } from '@/app/api/v1/sites/[id]/items.csv/route';
 
 import { createLevel } from '@/db/levels';
 import { createSite } from '@/db/sites';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
-import { itemsTemplateCsv } from '@/lib/register/csv';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
+import { itemsTemplateCsv } from '@/lib/register/csv-write';
 import {
   deleteItemAction,
   deleteLevelAction,

@@ -25,7 +25,7 @@ import {
 } from '@/lib/actions/register';
 import type { ActionState } from '@/lib/actions/state';
 import { startSession } from '@/lib/auth';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { createOrg, ctx, jsonRequest, PASSWORD, resetDatabase, runAction, signOutLocally, type OrgFixture } from './harness';
 import { createRegister, databaseState, siteFields, type RegisterFixture } from './harness/register-fixture';
 

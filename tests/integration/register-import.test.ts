@@ -10,7 +10,7 @@ import type { AuditRow, ItemRow } from '@/db/types';
 import { startSession } from '@/lib/auth';
 import { computeItem } from '@/lib/register/compute';
 import { listLadder } from '@/db/consequence-levels';
-import { itemsTemplateCsv } from '@/lib/register/csv';
+import { itemsTemplateCsv } from '@/lib/register/csv-write';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';

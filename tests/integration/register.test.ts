@@ -17,7 +17,7 @@ import { deleteLevelAction, saveLevelAction } from '@/lib/actions/register';
 import { startSession } from '@/lib/auth';
 import { STANDARD_GRAVITY } from '@/lib/physics';
 import { computeItem, inputsHash, itemDropCase, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
-import { itemsTemplateCsv } from '@/lib/register/csv';
+import { itemsTemplateCsv } from '@/lib/register/csv-write';
 import { itemSchema } from '@/lib/validation/item';
 import { levelSchema } from '@/lib/validation/level';
 import { siteSchema } from '@/lib/validation/site';

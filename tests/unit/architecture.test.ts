@@ -46,19 +46,6 @@ export function violation(file: string, target: string): string | null {
   return null;
 }
 
-/**
- * Imports that break a rule today and are being moved by work under way (issue 11, item 2: the register's commands
- * take the physics and validation types out of db/). Each entry must still be a violation: remove it when it is not.
- */
-const PENDING = new Set([
-  'db/items.ts -> lib/register/csv',
-  'db/items.ts -> lib/validation/item',
-  'db/levels.ts -> lib/validation/level',
-  'db/sites.ts -> lib/validation/site',
-  'db/consequence-levels.ts -> lib/register/default-ladder',
-  'db/consequence-levels.ts -> lib/validation/consequence-level',
-]);
-
 function allViolations(): string[] {
   return LAYERS.flatMap(sourceFiles).flatMap((file) => {
     const path = file.split('\\').join('/');
@@ -70,16 +57,8 @@ function allViolations(): string[] {
 }
 
 describe('import direction', () => {
-  const found = allViolations();
-  const key = (v: string) => v.slice(0, v.indexOf(':'));
-
-  it('has no import against the layers but the pending ones', () => {
-    expect(found.filter((v) => !PENDING.has(key(v)))).toEqual([]);
-  });
-
-  it('lists no pending import that is already gone', () => {
-    const live = new Set(found.map(key));
-    expect([...PENDING].filter((p) => !live.has(p))).toEqual([]);
+  it('has no import against the layers', () => {
+    expect(allViolations()).toEqual([]);
   });
 
   it('catches each kind of violation (the checker itself)', () => {

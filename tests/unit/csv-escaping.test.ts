@@ -2,7 +2,9 @@ import fc from 'fast-check';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import { escapeCell, unescapeCell } from '@/lib/register/csv-cells';
-import { itemsTemplateCsv, parseItemsCsv, registerCsv, type RegisterExportRow } from '@/lib/register/csv';
+import { parseItemsCsv } from '@/lib/register/csv-import';
+import { itemsTemplateCsv, registerCsv } from '@/lib/register/csv-write';
+import type { RegisterExportRow } from '@/db/types';
 
 // What a spreadsheet may run as a formula, written out here independently of the code: = + - @ and a leading tab or
 // line break (OWASP, "CSV Injection", recalled from memory), their full-width forms ＝ ＋ － ＠ and a leading | (the

@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { CALCULATOR_RULES, REGISTER_RULES, SHAPE_LABELS } from '@/lib/domain';
 import { SHAPE_CHOICES } from '@/lib/shape-choice';
 import { itemSchema } from '@/lib/validation/item';
-import { parseItemsCsv } from '@/lib/register/csv';
+import { parseItemsCsv } from '@/lib/register/csv-import';
 
 const LEVEL = '00000000-0000-4000-8000-000000000001';
 const item = (mass: string, length = '0.3') => ({

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
 import { checkNumber } from '@/lib/calculator/form';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { toFieldErrors } from '@/lib/validation/issues';
 import { itemSchema } from '@/lib/validation/item';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { classify } from '@/lib/domain';
 import { computeItem, inputsHash, itemDropCase, type FallSetting, type ItemPhysics } from '@/lib/register/compute';
-import { DEFAULT_LADDER } from '@/lib/register/default-ladder';
+import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { itemSchema } from '@/lib/validation/item';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { siteSchema } from '@/lib/validation/site';

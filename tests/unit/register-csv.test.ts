@@ -1,7 +1,10 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import type { ConsequenceLevel } from '@/lib/domain';
-import { CSV_LIMITS, itemsTemplateCsv, parseItemsCsv, registerCsv, type RegisterExportRow } from '@/lib/register/csv';
+import { parseItemsCsv } from '@/lib/register/csv-import';
+import { CSV_LIMITS } from '@/lib/register/csv-limits';
+import { itemsTemplateCsv, registerCsv } from '@/lib/register/csv-write';
+import type { RegisterExportRow } from '@/db/types';
 
 // Exact definitions: NIST SP 811 (2008), Appendix B: 1 ft = 0.3048 m, 1 lb = 0.45359237 kg,
 // 1 lbf = 4.4482216152605 N, so 1 ft·lbf = 0.3048 × 4.4482216152605 J.

@@ -1,4 +1,4 @@
-import { CSV_LIMITS, type CsvProblem } from '@/lib/register/csv';
+import { CSV_LIMITS, type CsvProblem } from '@/lib/register/csv-limits';
 
 // What the import route answers, and how the panel talks about it.
 

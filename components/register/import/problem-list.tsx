@@ -1,7 +1,7 @@
 'use client';
 
 import { useId, useState } from 'react';
-import type { CsvProblem } from '@/lib/register/csv';
+import type { CsvProblem } from '@/lib/register/csv-limits';
 import { Pager } from '@/components/ui/pager';
 import { n, plural } from './import-client';
 

@@ -1,7 +1,7 @@
 import { listLevels } from '@/db/levels';
 import { apiRoute } from '@/lib/http/api';
 import { siteOf } from '@/lib/register/api';
-import { itemsTemplateCsv } from '@/lib/register/csv';
+import { itemsTemplateCsv } from '@/lib/register/csv-write';
 
 type Params = { siteId: string };
 

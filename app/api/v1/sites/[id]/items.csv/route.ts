@@ -2,7 +2,7 @@ import { listLadder } from '@/db/consequence-levels';
 import { listRegisterForExport } from '@/db/items';
 import { apiRoute } from '@/lib/http/api';
 import { siteOf } from '@/lib/register/api';
-import { registerCsv } from '@/lib/register/csv';
+import { registerCsv } from '@/lib/register/csv-write';
 
 type Params = { id: string };
 

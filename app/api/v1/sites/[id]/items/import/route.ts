@@ -3,7 +3,8 @@ import { siteTags } from '@/db/items';
 import { listLevels } from '@/db/levels';
 import { apiRoute, badRequest } from '@/lib/http/api';
 import { siteOf } from '@/lib/register/api';
-import { CSV_LIMITS, parseItemsCsv, type CsvProblem } from '@/lib/register/csv';
+import { parseItemsCsv } from '@/lib/register/csv-import';
+import { CSV_LIMITS, type CsvProblem } from '@/lib/register/csv-limits';
 import { cleanText } from '@/lib/validation/text';
 import { importItems } from '@/lib/register/commands';
 

@@ -1,9 +1,9 @@
-import type { ConsequenceLevel } from '@/lib/domain';
-import { referenceEnergy } from '@/lib/reference-energies';
+import type { ConsequenceLevel } from './register';
+import { referenceEnergy } from './reference-energies';
 
 /**
  * The ladder a new organisation starts with. Each bound sits at a published reference energy, so a level says
- * which published test or criterion an impact exceeds (the bounds are read from lib/reference-energies.ts, so the
+ * which published test or criterion an impact exceeds (the bounds are read from reference-energies.ts, so the
  * two cannot drift apart); the names and guidance are Plumbline's own and an admin may change all of it. The bounds
  * are test conditions, not safe limits.
  */
