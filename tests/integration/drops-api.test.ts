@@ -19,15 +19,17 @@ beforeAll(async () => {
 });
 
 describe('POST /api/v1/drops', () => {
+  // m 85 kg, A 0.70 m², C 1.0, ρ 1.21 kg/m³, g 9.80 m/s² — OpenStax College Physics, Example 5.2 (answer: 44 m/s).
+  const skydiver = {
+    object: { mass_kg: 85, cd: 1.0, area_m2: 0.7, volume_m3: 0 },
+    drag_model: 'quadratic',
+    medium: { density_kg_m3: 1.21 },
+    release: { height_m: 3000 },
+    gravity_m_s2: 9.8,
+  };
+
   it('reproduces OpenStax College Physics, Example 5.2: a skydiver’s terminal speed of 44 m/s', async () => {
-    // m 85 kg, A 0.70 m², C 1.0, ρ 1.21 kg/m³, g 9.80 m/s² — OpenStax College Physics, Example 5.2 (answer: 44 m/s).
-    const { status, json } = await post({
-      object: { mass_kg: 85, cd: 1.0, area_m2: 0.7, volume_m3: 0 },
-      drag_model: 'quadratic',
-      medium: { density_kg_m3: 1.21 },
-      release: { height_m: 3000 },
-      gravity_m_s2: 9.8,
-    });
+    const { status, json } = await post(skydiver);
     expect(status).toBe(200);
     expect(json.terminal_speed_m_s).toBeGreaterThan(43.5);
     expect(json.terminal_speed_m_s).toBeLessThan(44.5);
@@ -35,15 +37,8 @@ describe('POST /api/v1/drops', () => {
   });
 
   it('carries the object and the closed-form speed curve of lib/physics/closed-forms.ts for the same skydiver', async () => {
-    // OpenStax College Physics, Example 5.2 again: v = v_t·tanh(g·t/v_t) with the published v_t of 44 m/s.
-    const { status, json } = await post({
-      object: { mass_kg: 85, cd: 1.0, area_m2: 0.7, volume_m3: 0 },
-      drag_model: 'quadratic',
-      medium: { density_kg_m3: 1.21 },
-      release: { height_m: 3000 },
-      gravity_m_s2: 9.8,
-      samples: 50,
-    });
+    // The same example: v = v_t·tanh(g·t/v_t) with the published v_t of 44 m/s.
+    const { status, json } = await post({ ...skydiver, samples: 50 });
     expect(status).toBe(200);
     expect(json.object).toMatchObject({ mass_kg: 85, cd: 1, area_m2: 0.7, volume_m3: 0, shape: null });
     const { t, closed_form_speed: curve } = json.samples as { t: number[]; closed_form_speed: number[] };
