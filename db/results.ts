@@ -1,4 +1,5 @@
-import type { LevelRow } from './types';
+import type { StoredResult } from '@/lib/domain';
+import type { ItemRow, LevelRow } from './types';
 
 /**
  * What db/ needs to know of a stored fall without knowing how it is computed: the register (lib/register) solves
@@ -6,15 +7,7 @@ import type { LevelRow } from './types';
  */
 
 /** The columns of an item the fall depends on. */
-export interface ItemPhysics {
-  mass_kg: number;
-  shape: string;
-  dimensions_m: Record<string, number>;
-  cd: number | null;
-  area_m2: number | null;
-  volume_m3: number | null;
-  height_m: number | null;
-}
+export type ItemPhysics = Pick<ItemRow, 'mass_kg' | 'shape' | 'dimensions_m' | 'cd' | 'area_m2' | 'volume_m3' | 'height_m'>;
 
 /** The columns of its level and site the fall depends on. */
 export interface FallSetting {
@@ -36,25 +29,11 @@ export interface LadderBound {
   lower_bound_j: number;
 }
 
-/** The stored result's columns, written together whenever an item's fall is computed. */
-export interface ResultColumns {
-  fall_time_s: number | null;
-  impact_speed_m_s: number | null;
-  impact_energy_j: number | null;
-  effective_energy_j: number | null;
-  drift_m: number | null;
-  sinks: boolean | null;
-  consequence_level_id: string | null;
-  model_version: string | null;
-  inputs_hash: string | null;
-  compute_error: string | null;
-}
+/** The stored result's columns, written together whenever an item's fall is computed; the database sets computed_at. */
+export type ResultColumns = Omit<StoredResult, 'computed_at'>;
 
 /**
  * The result to store for an item in its setting, classified on the ladder. Callers solve the falls before the
  * transaction, so inside it this is a lookup; only a row changed by a concurrent writer since is solved there.
  */
 export type ResultSource = (item: ItemPhysics, setting: FallSetting, ladder: readonly LadderBound[]) => ResultColumns;
-
-/** The consequence level of a stored energy on a ladder, for a ladder change (no fall changes). */
-export type Classifier = (energyJ: number | null, ladder: readonly LadderBound[]) => string | null;

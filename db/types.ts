@@ -158,24 +158,24 @@ export interface LevelFields {
   notes: string;
 }
 
-export interface ItemFields {
-  tag: string;
-  description: string;
-  category: ItemCategory;
-  quantity: number;
-  mass_kg: number;
-  shape: string;
-  dimensions_m: Record<string, number>;
-  cd: number | null;
-  area_m2: number | null;
-  volume_m3: number | null;
-  level_id: string;
-  height_m: number | null;
-  securing: Securing;
-  /** YYYY-MM-DD */
-  last_inspected: string | null;
-  notes: string;
-}
+export type ItemFields = Pick<
+  ItemRow,
+  | 'tag'
+  | 'description'
+  | 'category'
+  | 'quantity'
+  | 'mass_kg'
+  | 'shape'
+  | 'dimensions_m'
+  | 'cd'
+  | 'area_m2'
+  | 'volume_m3'
+  | 'level_id'
+  | 'height_m'
+  | 'securing'
+  | 'last_inspected'
+  | 'notes'
+>;
 
 /** A whole ladder, lowest level first; ranks are given by position. */
 export interface LadderFields {

@@ -3,7 +3,7 @@
 import type { ReactNode } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import { TextField } from '@/components/forms/fields';
-import type { CalculatorValues } from '@/lib/calculator/form';
+import type { CalculatorValues } from '@/lib/calculator/values';
 import { CALCULATOR_RULES } from '@/lib/domain';
 import { unitLabel } from '@/lib/units';
 

@@ -3,7 +3,7 @@
 import { DIMENSION_LABELS, SHAPE_LABELS } from '@/lib/domain';
 import { dimensionsOf, SHAPE_CHOICES } from '@/lib/shape-choice';
 import { SelectField } from '@/components/forms/fields';
-import type { CalculatorValues } from '@/lib/calculator/form';
+import type { CalculatorValues } from '@/lib/calculator/values';
 import { MATERIALS, material } from '@/lib/materials';
 import type { ResolvedObject } from '@/lib/physics';
 import { formatQuantity } from '@/lib/units';

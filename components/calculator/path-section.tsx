@@ -1,7 +1,7 @@
 'use client';
 
 import { SelectField } from '@/components/forms/fields';
-import { MODEL_CHOICES, PATHS, type CalculatorValues } from '@/lib/calculator/form';
+import { MODEL_CHOICES, PATHS, type CalculatorValues } from '@/lib/calculator/values';
 import { CalcNumber, ChoiceRow, Section, type CalcForm } from './field-helpers';
 import { MODEL_LABELS, PATH_LABELS, RELEASE_LABELS } from './labels';
 

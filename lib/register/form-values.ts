@@ -1,7 +1,8 @@
 import { DIMENSIONS, REGISTER_RULES, type ItemCategory, type Securing, type SiteKind, type Surface, type UnitSystem } from '@/lib/domain';
 import { dimensionsOf, type ShapeChoice } from '@/lib/shape-choice';
 import type { ItemRow, LevelRow, SiteRow } from '@/db/types';
-import { massSI, type CalculatorValues } from '@/lib/calculator/form';
+import { massSI } from '@/lib/calculator/drop-case';
+import type { CalculatorValues } from '@/lib/calculator/values';
 import { fromSI, type Quantity } from '@/lib/units';
 import { writeNumberText } from '@/lib/units/number-text';
 

@@ -1,5 +1,6 @@
 import { expect, test } from './fixtures';
-import { DEFAULT_VALUES, toDropCase } from '@/lib/calculator/form';
+import { toDropCase } from '@/lib/calculator/drop-case';
+import { DEFAULT_VALUES } from '@/lib/calculator/values';
 import { simulateDrop } from '@/lib/physics';
 import { formatNumber, fromSI } from '@/lib/units';
 import { signUpFresh } from './helpers';

@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { calculatorSchema, convertUnits, DEFAULT_VALUES, fromSearchParams, toDropCase, toSearchParams, type CalculatorValues } from '@/lib/calculator/form';
+import { toDropCase } from '@/lib/calculator/drop-case';
+import { calculatorSchema } from '@/lib/calculator/schema';
+import { convertUnits, fromSearchParams, toSearchParams } from '@/lib/calculator/url-state';
+import { DEFAULT_VALUES, type CalculatorValues } from '@/lib/calculator/values';
 import { toFieldErrors } from '@/lib/validation/issues';
 
 const v = (over: Partial<CalculatorValues>): CalculatorValues => ({ ...DEFAULT_VALUES, ...over });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
-import { checkNumber } from '@/lib/calculator/form';
+import { checkNumber } from '@/lib/calculator/schema';
 import { DEFAULT_LADDER } from '@/lib/domain/default-ladder';
 import { ladderSchema } from '@/lib/validation/consequence-level';
 import { toFieldErrors } from '@/lib/validation/issues';

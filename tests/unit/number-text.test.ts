@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { convertUnits, DEFAULT_VALUES, type CalculatorValues } from '@/lib/calculator/form';
+import { convertUnits } from '@/lib/calculator/url-state';
+import { DEFAULT_VALUES, type CalculatorValues } from '@/lib/calculator/values';
 import { readNumberText, writeNumberText } from '@/lib/units/number-text';
 import { quantityField } from '@/lib/validation/quantity';
 

@@ -104,7 +104,7 @@ describe('units in the header', () => {
       'B-1,Bolt box,fastener,0,tumbling_box,1,1,60,Roof,unsecured',
     );
     const r = parseItemsCsv(text, SITE);
-    // Limits of lib/calculator/form.ts RULES: mass > 0, height at most 50 m.
+    // Limits of REGISTER_RULES (lib/domain/quantity-rules.ts): mass > 0, height at most 50 m.
     expect(r.problems).toEqual([
       { line: 2, column: 'mass_lb', message: 'Mass must be greater than 0 lb.' },
       { line: 2, column: 'dim_height_m', message: 'Height must be at most 50 m.' },

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { can } from '@/lib/auth/policy';
 import { Calculator } from '@/components/calculator/calculator';
-import { fromSearchParams } from '@/lib/calculator/form';
+import { fromSearchParams } from '@/lib/calculator/url-state';
 import { requireRole } from '@/lib/auth';
 
 export const metadata: Metadata = { title: 'Drop calculator' };

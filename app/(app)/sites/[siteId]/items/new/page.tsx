@@ -6,7 +6,7 @@ import { ItemForm } from '@/components/items/item-form';
 import { listLevels } from '@/db/levels';
 import { findSite } from '@/db/sites';
 import { requireRole } from '@/lib/auth';
-import { fromSearchParams } from '@/lib/calculator/form';
+import { fromSearchParams } from '@/lib/calculator/url-state';
 import { itemValues, itemValuesFromCalculator } from '@/lib/register/form-values';
 import { formatQuantity } from '@/lib/units';
 
