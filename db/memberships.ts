@@ -109,17 +109,20 @@ export async function addMember(
   });
 }
 
+/** The organisation's admins and then the member, locked in that order: the last admin must always stay one. */
+async function lockMembership(trx: Conn, organisationId: string, userId: string): Promise<{ admins: string[]; current: { id: string; role: Role } }> {
+  const admins = await lockAdmins(trx, organisationId);
+  const current = await trx('memberships').where({ organisation_id: organisationId, user_id: userId }).first().forUpdate();
+  if (!current) throw new NotFoundError('No such member');
+  return { admins, current };
+}
+
 export async function changeRole(
   input: { organisationId: string; actorUserId: string; userId: string; role: Role },
   conn: Conn = getDb(),
 ): Promise<void> {
   await conn.transaction(async (trx) => {
-    const admins = await lockAdmins(trx, input.organisationId);
-    const current = await trx('memberships')
-      .where({ organisation_id: input.organisationId, user_id: input.userId })
-      .first()
-      .forUpdate();
-    if (!current) throw new NotFoundError('No such member');
+    const { admins, current } = await lockMembership(trx, input.organisationId, input.userId);
     if (current.role === input.role) return;
     if (current.role === 'admin' && admins.length <= 1) {
       throw new ConflictError('role', 'The last admin cannot be demoted: make another member admin first.');
@@ -144,12 +147,7 @@ export async function removeMember(
   conn: Conn = getDb(),
 ): Promise<void> {
   await conn.transaction(async (trx) => {
-    const admins = await lockAdmins(trx, input.organisationId);
-    const current = await trx('memberships')
-      .where({ organisation_id: input.organisationId, user_id: input.userId })
-      .first()
-      .forUpdate();
-    if (!current) throw new NotFoundError('No such member');
+    const { admins, current } = await lockMembership(trx, input.organisationId, input.userId);
     if (current.role === 'admin' && admins.length <= 1) {
       throw new ConflictError('userId', 'The last admin cannot be removed: make another member admin first.');
     }

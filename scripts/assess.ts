@@ -32,27 +32,15 @@ function readInput(arg: string): string {
   }
 }
 
-/** JSON that refuses NaN and infinities instead of printing them as null. */
-function strictJson(value: unknown, indent?: number): string {
-  return JSON.stringify(
-    value,
-    (key, v) => {
-      if (typeof v === 'number' && !Number.isFinite(v)) throw new PhysicsSolveError(`${key || 'a value'} came out as ${v}`);
-      return v;
-    },
-    indent,
-  );
-}
-
 /** The JSON text for one case and what became of it. */
 function solveOne(input: unknown): { text: (indent?: number) => string; error: CaseError | null } {
   const parsed = dropCaseSchema.safeParse(input);
   let error: CaseError;
   if (parsed.success) {
     try {
+      // simulateDrop refuses to return a non-finite number (PhysicsSolveError), so plain JSON never prints null for one.
       const result = simulateDrop(parsed.data);
-      const json = strictJson(result);
-      return { text: (indent) => (indent ? strictJson(result, indent) : json), error: null };
+      return { text: (indent) => JSON.stringify(result, null, indent), error: null };
     } catch (e) {
       if (e instanceof PhysicsInputError) error = { kind: 'input', issues: [physicsIssue(e)] };
       else if (e instanceof PhysicsSolveError) error = { kind: 'solve', message: e.message };
@@ -68,8 +56,14 @@ function describe(error: CaseError, where: string): string[] {
   return error.kind === 'input' ? error.issues.map((i) => `${where}${i.path}: ${i.message}`) : [`${where}cannot solve: ${error.message}`];
 }
 
-async function write(text: string): Promise<void> {
-  if (!process.stdout.write(text)) await new Promise<void>((resolve) => process.stdout.once('drain', resolve));
+/** Output goes out in pieces of about 64 KB: one write per case would cost a system call each. */
+let pending = '';
+async function write(text: string, flush = false): Promise<void> {
+  pending += text;
+  if (pending.length < 65_536 && !flush) return;
+  const piece = pending;
+  pending = '';
+  if (!process.stdout.write(piece)) await new Promise<void>((resolve) => process.stdout.once('drain', resolve));
 }
 
 async function main(argv: string[]): Promise<number> {
@@ -84,7 +78,7 @@ async function main(argv: string[]): Promise<number> {
   if (!Array.isArray(json)) {
     const one = solveOne(json);
     if (one.error) for (const line of describe(one.error, '')) process.stderr.write(line + '\n');
-    await write(one.text(2) + '\n');
+    await write(one.text(2) + '\n', true);
     return one.error ? EXIT[one.error.kind] : EXIT.ok;
   }
   if (json.length === 0) fail(['the list of cases is empty']);
@@ -99,7 +93,7 @@ async function main(argv: string[]): Promise<number> {
     }
     await write(one.text() + (i + 1 < json.length ? ',\n' : '\n'));
   }
-  await write(']\n');
+  await write(']\n', true);
   return code;
 }
 
