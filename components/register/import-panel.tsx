@@ -1,6 +1,7 @@
 'use client';
 
 import { useCallback, useId, useState } from 'react';
+import type { UnitSystem } from '@/lib/domain';
 import { CSV_LIMITS } from '@/lib/register/csv-limits';
 import { SafetyNote } from '@/components/layout/safety-note';
 import { buttonStyles } from '@/components/ui/button';
@@ -13,9 +14,7 @@ import { ProblemList } from './import/problem-list';
 import { TemplateHelp } from './import/template-help';
 import { useImportUpload } from './import/use-import-upload';
 
-type Units = 'si' | 'us';
-
-export function ImportPanel({ siteId, siteName, units, levelNames }: { siteId: string; siteName: string; units: Units; levelNames: string[] }) {
+export function ImportPanel({ siteId, siteName, units, levelNames }: { siteId: string; siteName: string; units: UnitSystem; levelNames: string[] }) {
   const headingId = useId();
   const [file, setFile] = useState<File | null>(null);
   const [rejection, setRejection] = useState<string | null>(null);

@@ -1,11 +1,12 @@
 import type { Member } from '@/db/types';
+import type { UnitSystem } from '@/lib/domain';
 import { findSite } from '@/db/sites';
 import { NotFoundError } from '@/lib/errors';
 import { badRequest } from '@/lib/http/api';
 import { unitsField } from '@/lib/validation/quantity';
 
 /** The unit system a JSON body declares, and the body without that key. */
-export function bodyUnits(body: Record<string, unknown>): { units: 'si' | 'us'; rest: Record<string, unknown> } {
+export function bodyUnits(body: Record<string, unknown>): { units: UnitSystem; rest: Record<string, unknown> } {
   const { units, ...rest } = body;
   const parsed = unitsField.safeParse(units);
   if (!parsed.success) badRequest('units', 'Units must be "si" or "us".');

@@ -41,6 +41,11 @@ export function violation(file: string, target: string): string | null {
   if (under(file, 'db/seed')) return under(target, 'app', 'components') ? 'the seed never imports app/ or components/' : null;
   // knexfile.ts at the root is the connection settings the Knex CLI reads too.
   if (under(file, 'db')) return under(target, 'db', 'lib/domain', 'lib/errors', 'knexfile') ? null : 'db/ imports only db/, lib/domain and lib/errors';
+  if (under(file, 'lib/units')) return under(target, 'lib/units', 'lib/domain') ? null : 'lib/units imports only itself and lib/domain';
+  // The schemas sit below the features that use them: a calculator or register change must not move a schema.
+  if (under(file, 'lib/validation') && under(target, 'lib/calculator', 'lib/register', 'lib/actions')) {
+    return 'lib/validation never imports lib/calculator, lib/register or lib/actions';
+  }
   if (under(file, 'lib')) return under(target, 'app', 'components') ? 'lib/ never imports app/ or components/' : null;
   if (under(file, 'components')) return under(target, 'app') ? 'components never import app/' : null;
   return null;
@@ -78,6 +83,11 @@ describe('import direction', () => {
     expect(violation('lib/physics/fall.ts', 'lib/units')).not.toBeNull();
     expect(violation('db/migrations/x.ts', 'lib/register/default-ladder')).not.toBeNull();
     expect(violation('lib/errors.ts', 'lib/http/api')).not.toBeNull();
+    expect(violation('lib/units/index.ts', 'db/types')).not.toBeNull();
+    expect(violation('lib/units/index.ts', 'lib/domain/units')).toBeNull();
+    expect(violation('lib/validation/item.ts', 'lib/calculator/values')).not.toBeNull();
+    expect(violation('lib/validation/item.ts', 'lib/register/csv-import')).not.toBeNull();
+    expect(violation('lib/validation/item.ts', 'lib/physics')).toBeNull();
     expect(violation('app/page.tsx', 'db/items')).toBeNull();
   });
 });

@@ -1,9 +1,7 @@
-import { DIMENSIONS } from '@/lib/domain';
-
-type Units = 'si' | 'us';
+import { DIMENSIONS, type UnitSystem } from '@/lib/domain';
 
 /** How to write the file: the templates, required and optional columns, and units in the headers. */
-export function TemplateHelp({ siteId, units, levelNames }: { siteId: string; units: Units; levelNames: string[] }) {
+export function TemplateHelp({ siteId, units, levelNames }: { siteId: string; units: UnitSystem; levelNames: string[] }) {
   const either = (si: string, us: string) => (
     <>
       <code className="num">{units === 'si' ? si : us}</code> or <code className="num">{units === 'si' ? us : si}</code>
