@@ -87,17 +87,6 @@ export function DropResults({ result, dropCase, units, description, updating }: 
   const inLiquid = result.effective_impact_energy_j !== result.impact_energy_j;
   const vx0 = dropCase.release?.velocity_m_s?.[0] ?? 0;
 
-  if (!result.sinks) {
-    return (
-      <section aria-label="Results" className="flex flex-col gap-4">
-        <p role="status" className="rounded-card bg-cord-50 px-4 py-3 text-cord-700">
-          <strong>It floats.</strong> {result.warnings.join(' ')}
-        </p>
-        <SafetyNote />
-      </section>
-    );
-  }
-
   const copy = async () => {
     await navigator.clipboard.writeText(summaryText(result, units, description, window.location.href));
     setCopied(true);
@@ -116,8 +105,14 @@ export function DropResults({ result, dropCase, units, description, updating }: 
           {copied ? 'Summary copied' : 'Copy summary'}
         </button>
       </div>
+      {result.floats_at ? (
+        <p role="status" className="rounded-card bg-cord-50 px-4 py-3 text-cord-700" data-testid="floats">
+          <strong>It floats in the {result.floats_at}.</strong> It does not reach the bottom: the values below are those on
+          arrival at the surface of the {result.floats_at}, which is where it strikes.
+        </p>
+      ) : null}
       <dl className="grid gap-3 sm:grid-cols-2">
-        <Readout label="Warning time (fall)" quantity="time" value={result.fall_time_s} vacuum={result.vacuum.fall_time_s} units={units} testId="fall-time" />
+        <Readout label={result.floats_at ? 'Warning time (to the surface it floats at)' : 'Warning time (fall)'} quantity="time" value={result.fall_time_s} vacuum={result.vacuum.fall_time_s} units={units} testId="fall-time" />
         <Readout
           label="Impact speed"
           quantity="speed"

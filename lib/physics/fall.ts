@@ -93,6 +93,8 @@ export interface DropResult {
   readonly object: ResolvedObject;
   /** False when the object floats in a layer and never reaches the bottom. */
   readonly sinks: boolean;
+  /** The medium whose surface a floating object stops at (its impact values are those on arrival there); null when it sinks. */
+  readonly floats_at: string | null;
   readonly fall_time_s: number;
   readonly impact_speed_m_s: number;
   readonly impact_velocity_m_s: [number, number];
@@ -212,6 +214,7 @@ export function simulateDrop(input: DropCase, options: SimulateOptions = {}): Dr
     model_version: MODEL_VERSION,
     object: c.object,
     sinks: floatsIn === null,
+    floats_at: floatsIn ? floatsIn.medium.label : null,
     fall_time_s: t,
     impact_speed_m_s: speed,
     impact_velocity_m_s: [vx, vy],
@@ -641,7 +644,7 @@ function warningsFor(
     const buoyancy = floatsIn.medium.density_kg_m3 * o.volume_m3 * c.gravity_m_s2;
     w.push(
       `The object floats in ${floatsIn.medium.label} (buoyancy ${buoyancy.toPrecision(4)} N is at least its weight ${(o.mass_kg * c.gravity_m_s2).toPrecision(4)} N), ` +
-        `so it stops at the top of layer ${floatsIn.index} and does not reach the bottom. The impact values are those on arrival at that surface.`,
+        `so it stops at the surface of the ${floatsIn.medium.label} and does not reach the bottom. The impact values are those on arrival at that surface.`,
     );
   }
   if (c.drag_model === 'none') {

@@ -76,3 +76,16 @@ test('a fall from a deck through seawater shows the water layer and the effectiv
   await page.waitForSelector('.js-plotly-plot');
   await screens(page, 'calculator-deck-to-seabed');
 });
+
+test('a sheet that floats shows its arrival at the sea surface and names that surface', async ({ page }) => {
+  await signUpFresh(page, 'float');
+  // 15 kg in 0.052 m³ (2.4 × 1.2 × 0.018 m) is lighter than the seawater it displaces, so it stops at the surface.
+  await page.goto('/calculator?units=si&path=deck_to_sea&airGap=100&waterDepth=60&shape=flat_plate&width=2.4&height=1.2&thickness=0.018&mass=15');
+  await formsReady(page);
+  await expect(page.getByTestId('floats')).toContainText('It floats in the seawater');
+  await expect(page.getByText('Warning time (to the surface it floats at)')).toBeVisible();
+  await expect(page.getByTestId('impact-energy')).toBeVisible();
+  await expect(page.getByTestId('impact-speed')).toBeVisible();
+  await expect(page.getByText(/top of layer/)).toHaveCount(0);
+  await screens(page, 'calculator-floating-sheet');
+});

@@ -220,6 +220,10 @@ describe('layers, events and edge cases', () => {
     expect(r.fall_time_s).toBe(r.layers[0].exit_time_s);
     expect(r.terminal_speed_m_s).toBeNull();
     expect(r.warnings[0]).toMatch(/floats/);
+    // The surface is named by its medium, not by a layer number a reader would count from 1.
+    expect(r.floats_at).toMatch(/^seawater/);
+    expect(r.warnings[0]).toMatch(/stops at the surface of the seawater/);
+    expect(r.warnings[0]).not.toMatch(/layer \d/);
   });
 
   it('zero height gives an immediate impact', () => {
