@@ -326,11 +326,28 @@ export async function siteTags(organisationId: string, siteId: string, conn: Con
   return rows.map((r: { tag: string }) => r.tag);
 }
 
-/** The item's audited changes, newest first. */
-export async function itemHistory(organisationId: string, itemId: string, conn: Conn = getDb()): Promise<(AuditRow & { actor_name: string | null })[]> {
+/**
+ * The item's audited changes, newest first, with the changes of its level and site since it was added that
+ * recomputed results (the level it is on now; an entry names how many items it recomputed).
+ */
+export async function itemHistory(
+  organisationId: string,
+  item: Pick<ItemRow, 'id' | 'level_id' | 'site_id' | 'created_at'>,
+  conn: Conn = getDb(),
+): Promise<(AuditRow & { actor_name: string | null })[]> {
   return conn('audit_log as a')
     .leftJoin('users as u', 'u.id', 'a.actor_user_id')
-    .where({ 'a.organisation_id': organisationId, 'a.entity_type': 'item', 'a.entity_id': itemId })
+    .where('a.organisation_id', organisationId)
+    .andWhere((q) =>
+      q
+        .where({ 'a.entity_type': 'item', 'a.entity_id': item.id })
+        .orWhere((r) =>
+          r
+            .where('a.created_at', '>=', item.created_at)
+            .whereRaw(`coalesce((a.after->>'recomputed_items')::int, 0) > 0`)
+            .andWhere((e) => e.where({ 'a.entity_type': 'level', 'a.entity_id': item.level_id }).orWhere({ 'a.entity_type': 'site', 'a.entity_id': item.site_id })),
+        ),
+    )
     .orderBy('a.id', 'desc')
     .limit(50)
     .select('a.*', 'u.display_name as actor_name');

@@ -8,7 +8,22 @@ const ACTION_LABELS: Record<string, string> = {
   'member.removed': 'Member removed',
   'user.profile_updated': 'Profile updated',
   'user.password_changed': 'Password changed',
+  'site.created': 'Site added',
+  'site.updated': 'Site changed',
+  'site.deleted': 'Site deleted',
+  'level.created': 'Level added',
+  'level.updated': 'Level changed',
+  'level.deleted': 'Level deleted',
+  'item.created': 'Item added',
+  'item.updated': 'Item changed',
+  'item.deleted': 'Item deleted',
+  'items.imported': 'Items imported',
+  'ladder.changed': 'Consequence ladder changed',
 };
+
+const quoted = (v: unknown) => (typeof v === 'string' && v ? `“${v}”` : '');
+const recomputed = (after: Record<string, unknown>) =>
+  typeof after.recomputed_items === 'number' && after.recomputed_items > 0 ? `, ${after.recomputed_items} result(s) recomputed` : '';
 
 function summary(row: AuditRow): string {
   const before = (row.before ?? {}) as Record<string, unknown>;
@@ -16,6 +31,11 @@ function summary(row: AuditRow): string {
   if (row.action === 'member.role_changed') return `${before.role} → ${after.role}`;
   if (row.action === 'member.invited') return `${after.email} as ${after.role}`;
   if (row.action === 'organisation.renamed') return `“${before.name}” → “${after.name}”`;
+  // The entity by the name it had: after a change, its new name; after a delete, the name it had before.
+  if (/^(site|level)\./.test(row.action)) return `${quoted(after.name ?? before.name)}${recomputed(after)}`;
+  if (row.action.startsWith('item.')) return quoted(after.tag ?? before.tag);
+  if (row.action === 'items.imported') return `${after.imported} from ${quoted(after.file_name)}`;
+  if (row.action === 'ladder.changed' && Array.isArray(after.levels)) return `${after.levels.length} levels, ${after.reclassified_items} item(s) reclassified`;
   return '';
 }
 

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from 'vitest';
-import { findItem } from '@/db/items';
+import { findItem, itemHistory } from '@/db/items';
 import { getDb } from '@/db/knex';
 import { createLevel } from '@/db/levels';
 import { createSite } from '@/db/sites';
@@ -106,5 +106,15 @@ describe('the register commands solve first and write after', () => {
     // inside the level's write because the wind it was solved for is no longer the stored one.
     expect(count).toMatchObject({ before: 10, write: 5 });
     await expectStoredResultsCurrent();
+  });
+
+  it('the recomputation a level change caused shows in the item’s own history, and an unrelated level’s change does not', async () => {
+    const item = await createItem(org.id, org.users.admin.id, siteId, bolt(1));
+    const other = await createLevel(org.id, org.users.admin.id, siteId, levelSchema('si').parse({ name: 'Roof', floor_height: 30, surface: 'ground' }));
+    await updateLevel(org.id, org.users.admin.id, other.id, levelSchema('si').parse({ name: 'Roof', floor_height: 32, surface: 'ground' }));
+    await updateLevel(org.id, org.users.admin.id, levelId, levelSchema('si').parse({ name: 'Gantry', floor_height: 21, surface: 'ground' }));
+    const history = await itemHistory(org.id, item);
+    expect(history.map((h) => `${h.entity_type}:${h.action}`)).toEqual(['level:level.updated', 'item:item.created']);
+    expect(history[0].entity_id).toBe(levelId);
   });
 });

@@ -8,6 +8,7 @@ import { ConfirmForm } from '@/components/forms/confirm-form';
 import { ItemFacts } from '@/components/items/item-facts';
 import { ItemForm } from '@/components/items/item-form';
 import { ItemHistory } from '@/components/items/item-history';
+import { historyEntries } from '@/lib/register/history';
 import { StoredResult } from '@/components/items/stored-result';
 import { listLadder } from '@/db/consequence-levels';
 import { findItem, itemHistory } from '@/db/items';
@@ -42,9 +43,10 @@ export default async function ItemPage({ params, searchParams }: { params: Promi
   const units = member.unitSystem;
   const [ladder, history, levels] = await Promise.all([
     listLadder(member.organisationId),
-    itemHistory(member.organisationId, item.id),
-    canEdit ? listLevels(member.organisationId, item.site_id) : Promise.resolve([]),
+    itemHistory(member.organisationId, item),
+    listLevels(member.organisationId, item.site_id),
   ]);
+  const entries = historyEntries(history, units, new Map(levels.map((l) => [l.id, l.name])));
   const level = ladder.find((l) => l.id === item.consequence_level_id) ?? null;
   const upToDate = item.inputs_hash === inputsHash(itemDropCase(item, item));
   const computed = detail(item);
@@ -97,7 +99,7 @@ export default async function ItemPage({ params, searchParams }: { params: Promi
         <h2 id="history-heading" className="mb-3 text-lg font-bold">
           Change history
         </h2>
-        <ItemHistory rows={history} />
+        <ItemHistory entries={entries} />
       </section>
 
       {canEdit ? (
