@@ -8,7 +8,7 @@ import { NavLink } from './nav-link';
 
 export function AppHeader({ member }: { member: Member }) {
   return (
-    <header className="border-b border-paper-rule bg-paper-raised">
+    <header className="border-b border-paper-rule bg-paper-raised print:hidden">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-5 py-3">
         <Link href="/" aria-label="Plumbline home">
           <Wordmark />

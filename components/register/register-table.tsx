@@ -17,6 +17,7 @@ import { ladderInOrder } from './ladder';
 import { BodyCells, NUMERIC_COLUMNS, PINNED_COLUMN } from './table/body-cells';
 import { matchesSearch, UNCLASSIFIED, useColumns } from './table/columns';
 import { ColumnChooser, FilterSelect } from './table/toolbar';
+import { usePrintEveryRow } from './table/use-print-every-row';
 
 interface Props {
   rows: RegisterViewRow[];
@@ -63,6 +64,7 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
     getPaginationRowModel: getPaginationRowModel(),
   });
 
+  usePrintEveryRow(table);
   const headingId = useId();
   const filtered = table.getFilteredRowModel().rows.length;
   const { pageIndex, pageSize } = table.getState().pagination;
@@ -78,7 +80,7 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
   };
 
   return (
-    <section aria-labelledby={headingId} className="flex flex-col gap-4 rounded-card bg-paper-raised p-5 shadow-card">
+    <section aria-labelledby={headingId} className="flex flex-col gap-4 rounded-card bg-paper-raised p-5 shadow-card print:p-0 print:shadow-none">
       <div className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
         <h2 id={headingId} className="text-lg font-bold">
           Items at height
@@ -95,7 +97,7 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
         </p>
       ) : (
         <>
-          <div className="flex flex-wrap items-end gap-3" role="search" aria-label="Search and filter the register">
+          <div className="flex flex-wrap items-end gap-3 print:hidden" role="search" aria-label="Search and filter the register">
             <Labelled label="Search tag or description" className="min-w-48 flex-[2_1_16rem]">
               {(id) => (
                 <input id={id} type="search" value={search} onChange={(e) => setSearch(e.target.value)} placeholder="e.g. T-104 or spanner" className={controlStyle} />
@@ -117,7 +119,7 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
             along with the object. Heights marked “from level” use the level’s floor height.
           </p>
 
-          <div className="overflow-x-auto rounded-md border border-paper-rule">
+          <div className="overflow-x-auto rounded-md border border-paper-rule print:overflow-visible">
             {/* Separate borders, because collapsed ones stay behind when the pinned column's cells slide. */}
             <table className="w-full min-w-max border-separate border-spacing-0 text-left text-sm">
               <caption className="sr-only">
@@ -175,6 +177,7 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
             </table>
           </div>
 
+          <div className="print:hidden">
           <Pager
             label="Register pages"
             page={pageIndex}
@@ -205,6 +208,7 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
               )}
             </Labelled>
           </Pager>
+          </div>
         </>
       )}
 

@@ -41,7 +41,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
     <div className="flex flex-col gap-6">
       <header className="flex flex-wrap items-end justify-between gap-4">
         <div className="flex flex-col gap-1">
-          <Link href="/sites" className="text-sm font-semibold text-cord-600 hover:underline">
+          <Link href="/sites" className="text-sm font-semibold text-cord-600 hover:underline print:hidden">
             ← Sites
           </Link>
           <h1 className="text-2xl font-bold tracking-tight">{site.name}</h1>
@@ -58,7 +58,11 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
             {SURFACE_LABELS[site.surface].toLowerCase()}
           </p>
         </div>
-        <nav aria-label="Register actions" className="flex flex-wrap gap-2">
+        <p className="hidden text-xs text-ink-soft print:block" data-testid="print-caution">
+          Register printed {new Date().toISOString().slice(0, 10)}. Planning estimates from idealised physics: they support,
+          and never replace, the judgement of a competent person under local codes and site rules.
+        </p>
+        <nav aria-label="Register actions" className="flex flex-wrap gap-2 print:hidden">
           {canEdit && levels.length ? (
             <Link href={`/sites/${site.id}/items/new`} className={`${button} bg-cord-600 text-white hover:bg-cord-700`}>
               Add item
@@ -78,7 +82,7 @@ export default async function SitePage({ params }: { params: Promise<{ siteId: s
       <SummaryStrip rows={rows} ladder={ladder} units={units} />
       <SiteRegisterView packed={packRegister(rows, levels, ladder)} ladder={ladder} units={units} canEdit={canEdit} />
 
-      <section className="rounded-card bg-paper-raised p-5 shadow-card" aria-labelledby="levels-heading">
+      <section className="rounded-card bg-paper-raised p-5 shadow-card print:hidden" aria-labelledby="levels-heading">
         <h2 id="levels-heading" className="mb-2 text-lg font-bold">
           Levels and work areas
         </h2>
