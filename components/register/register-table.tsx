@@ -121,7 +121,7 @@ export function RegisterTable({ rows, ladder, levels, units, canEdit }: Props) {
 
           <div className="overflow-x-auto rounded-md border border-paper-rule print:overflow-visible">
             {/* Separate borders, because collapsed ones stay behind when the pinned column's cells slide. */}
-            <table className="w-full min-w-max border-separate border-spacing-0 text-left text-sm">
+            <table className="w-full min-w-max border-separate border-spacing-0 text-left text-sm print:min-w-0 print:text-[10px]">
               <caption className="sr-only">
                 Register of items at height, {n(filtered)} of {n(rows.length)} lines; column headers sort the table.
               </caption>

@@ -1,6 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { signUpFresh } from './helpers';
-import { screens } from './screens';
+import { formsReady, screens } from './screens';
 
 // An invented yard with 30 invented bolts: more than the 25 rows the screen shows per page.
 test('printing a site gives the whole register, no navigation, and the safety caution', async ({ page }) => {
@@ -17,6 +17,8 @@ test('printing a site gives the whole register, no navigation, and the safety ca
   }
 
   await page.goto(`/sites/${site.id}`);
+  // The print listener is the table's own: wait until the page's client code runs (its forms are ready then).
+  await formsReady(page);
   const rows = page.locator('table tbody tr');
   await expect(rows).toHaveCount(25);
   await expect(page.getByTestId('print-caution')).toBeHidden();
