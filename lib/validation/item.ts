@@ -31,7 +31,11 @@ function levelChoice() {
   return z.preprocess(
     (v) => (v === undefined || v === null || (typeof v === 'string' && v.trim() === '') ? undefined : v),
     uuidField('Level must be one of the site’s levels.').optional(),
-  ).refine((v) => v !== undefined, { message: 'Choose a level.' });
+  ).transform((v, ctx) => {
+    if (v !== undefined) return v;
+    ctx.addIssue({ code: 'custom', message: 'Choose a level.' });
+    return z.NEVER;
+  });
 }
 
 /**
