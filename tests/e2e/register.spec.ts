@@ -102,6 +102,22 @@ test('a site, a level, an item from the calculator, a CSV import with a bad row,
   const byTag = (tag: string, column: string) => cells.find((c) => c[0] === tag)![header.indexOf(column)];
   expect([byTag('TQ-001', 'drop_height_m'), byTag('TQ-001', 'height_from'), byTag('TQ-001', 'height_m')]).toEqual(['30', 'item', '30']);
   expect([byTag('P-004', 'drop_height_m'), byTag('P-004', 'height_from'), byTag('P-004', 'height_m')]).toEqual(['18', 'level', '']);
+
+  // The sites list at tablet width: every chip names its level in text (WCAG 2.1, 1.4.1 Use of Color), and the
+  // table fits its box, so no column header is cut off.
+  await page.setViewportSize({ width: 820, height: 1180 });
+  await page.goto('/sites');
+  const chips = page.getByTestId('level-chip');
+  await expect(chips.first()).toBeVisible();
+  const ladderNames = new RegExp(`^(${DEFAULT_LADDER.map((l) => l.name).join('|')}):\\s*\\d+$`);
+  for (const chip of await chips.all()) expect((await chip.innerText()).trim()).toMatch(ladderNames);
+  const sitesTable = page.getByRole('table');
+  const fits = await sitesTable.evaluate((t) => {
+    const box = t.parentElement!.getBoundingClientRect();
+    return [...t.querySelectorAll('th')].every((th) => th.getBoundingClientRect().right <= box.right + 0.5) && t.parentElement!.scrollWidth <= t.parentElement!.clientWidth;
+  });
+  expect(fits).toBe(true);
+  await screens(page, 'register-sites');
 });
 
 test('a viewer reads a register but gets no controls to change it', async ({ page, browser }) => {
