@@ -3,7 +3,7 @@ import { type ConsequenceLevel, LADDER_COLOURS, SITE_KIND_LABELS, SURFACE_LABELS
 import type { SiteListing } from '@/db/sites';
 import { formatQuantity } from '@/lib/units';
 
-/** Register lines per consequence level, as a row of small swatches with counts; the name is in the label. */
+/** Register lines per consequence level: each chip names its level in text, the swatch only repeats it in colour. */
 function LadderCounts({ counts, ladder }: { counts: Record<string, number>; ladder: ConsequenceLevel[] }) {
   const present = ladder.filter((l) => counts[l.id]);
   if (!present.length) return <span className="text-ink-muted">—</span>;
@@ -13,10 +13,10 @@ function LadderCounts({ counts, ladder }: { counts: Record<string, number>; ladd
         .slice()
         .reverse()
         .map((l) => (
-          <li key={l.id} className="flex items-center gap-1 rounded border border-paper-rule px-1.5 py-0.5 text-xs" title={l.name}>
-            <span aria-hidden className="inline-block h-2.5 w-2.5 rounded-sm" style={{ backgroundColor: LADDER_COLOURS[l.colour].hex }} />
-            <span className="sr-only">{l.name}:</span>
-            <span className="num">{counts[l.id]}</span>
+          <li key={l.id} className="flex items-center gap-1 rounded border border-paper-rule px-1.5 py-0.5 text-xs" data-testid="level-chip">
+            <span aria-hidden className="inline-block h-2.5 w-2.5 shrink-0 rounded-sm" style={{ backgroundColor: LADDER_COLOURS[l.colour].hex }} />
+            <span>{l.name}:</span>
+            <span className="num font-semibold">{counts[l.id]}</span>
           </li>
         ))}
     </ul>
@@ -26,15 +26,15 @@ function LadderCounts({ counts, ladder }: { counts: Record<string, number>; ladd
 export function SiteTable({ sites, ladder, units }: { sites: SiteListing[]; ladder: ConsequenceLevel[]; units: UnitSystem }) {
   return (
     <div className="overflow-x-auto">
-      <table className="w-full min-w-[760px] text-left text-sm">
+      <table className="w-full text-left text-sm">
         <thead className="text-xs uppercase tracking-wide text-ink-muted">
           <tr>
             <th className="pb-2 pr-3 font-semibold">Site</th>
-            <th className="pb-2 pr-3 font-semibold">Kind</th>
+            <th className="hidden pb-2 pr-3 font-semibold lg:table-cell">Kind</th>
             <th className="pb-2 pr-3 text-right font-semibold">Levels</th>
             <th className="pb-2 pr-3 text-right font-semibold">Items</th>
             <th className="pb-2 pr-3 text-right font-semibold">Highest impact energy</th>
-            <th className="pb-2 font-semibold">Lines per consequence level</th>
+            <th className="pb-2 font-semibold">Lines by consequence level</th>
           </tr>
         </thead>
         <tbody>
@@ -45,11 +45,12 @@ export function SiteTable({ sites, ladder, units }: { sites: SiteListing[]; ladd
                   {s.name}
                 </Link>
                 <span className="block text-xs text-ink-muted">
+                  <span className="lg:hidden">{SITE_KIND_LABELS[s.kind]} · </span>
                   {s.location ? `${s.location} · ` : ''}over {SURFACE_LABELS[s.surface].toLowerCase()} · wind{' '}
                   <span className="num">{formatQuantity('speed', s.design_wind_m_s, units)}</span>
                 </span>
               </td>
-              <td className="py-3 pr-3">{SITE_KIND_LABELS[s.kind]}</td>
+              <td className="hidden py-3 pr-3 lg:table-cell">{SITE_KIND_LABELS[s.kind]}</td>
               <td className="num py-3 pr-3 text-right">{s.level_count}</td>
               <td className="py-3 pr-3 text-right">
                 <span className="num">{s.item_count}</span>

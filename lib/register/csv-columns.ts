@@ -48,9 +48,15 @@ export const ITEM_COLUMNS: ColumnDef[] = [
   { key: 'notes', label: 'Notes' },
 ];
 
-/** Stored results and the site name: written on export, accepted and ignored on import so an export reads back. */
+/**
+ * Stored results and the site name: written on export, accepted and ignored on import so an export reads back.
+ * drop_height is the height the result was computed at and height_from says whose it is (item or level); the
+ * item's own height stays in the height column, so re-importing never turns a level's height into an override.
+ */
 const OUTPUT_COLUMNS: ColumnDef[] = [
   { key: 'site', label: 'Site' },
+  { key: 'drop_height', quantity: 'length', label: 'Drop height' },
+  { key: 'height_from', label: 'Height from' },
   { key: 'fall_time', quantity: 'time', label: 'Fall time' },
   { key: 'impact_speed', quantity: 'speed', label: 'Impact speed' },
   { key: 'impact_energy', quantity: 'energy', label: 'Impact energy' },

@@ -162,6 +162,8 @@ export function registerCsv(rows: RegisterExportRow[], options: { units: UnitSys
       notes: r.notes,
     }),
     siteName,
+    inUnits('length', r.height_m, units),
+    r.height_overridden ? 'item' : 'level',
     plain(r.fall_time_s),
     inUnits('speed', r.impact_speed_m_s, units),
     inUnits('energy', r.impact_energy_j, units),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { LADDER_COLOUR_IDS } from '@/lib/domain';
-import { enumField, quantityField, textField } from './quantity';
+import { enumField, formatLimit, quantityField, textField } from './quantity';
 
 const rung = z.object({
   name: textField('Name', 60, 1),
@@ -22,7 +22,7 @@ export const ladderSchema = z
     }
     for (let i = 1; i < levels.length; i++) {
       if (!(levels[i].lower_bound_j > levels[i - 1].lower_bound_j)) {
-        ctx.addIssue({ code: 'custom', path: ['levels', i, 'lower_bound_j'], message: `Lower bound must be above the level before (${levels[i - 1].lower_bound_j} J).` });
+        ctx.addIssue({ code: 'custom', path: ['levels', i, 'lower_bound_j'], message: `Lower bound must be above the level before (${formatLimit(levels[i - 1].lower_bound_j)} J).` });
       }
     }
     const seen = new Set<string>();

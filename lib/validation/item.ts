@@ -26,6 +26,18 @@ function inspectionDate() {
   });
 }
 
+/** A form's empty level select posts '' (a CSV may leave the cell blank): that is a missing choice, not a bad one. */
+function levelChoice() {
+  return z.preprocess(
+    (v) => (v === undefined || v === null || (typeof v === 'string' && v.trim() === '') ? undefined : v),
+    uuidField('Level must be one of the site’s levels.').optional(),
+  ).transform((v, ctx) => {
+    if (v !== undefined) return v;
+    ctx.addIssue({ code: 'custom', message: 'Choose a level.' });
+    return z.NEVER;
+  });
+}
+
 /**
  * An item at height, in the user's units (forms, CSV) or SI (JSON without "units"); parsed values are SI with
  * the stored column names. A catalogue shape needs its dimensions; "direct" needs a drag coefficient and an area.
@@ -47,7 +59,7 @@ export function itemSchema(units: UnitSystem) {
       cd: quantityField(REGISTER_RULES.cd, units, false),
       area: quantityField(REGISTER_RULES.area, units, false),
       volume: quantityField(REGISTER_RULES.volume, units, false),
-      level_id: uuidField('Level must be one of the site’s levels.'),
+      level_id: levelChoice(),
       height: quantityField(REGISTER_RULES.releaseHeight, units, false),
       securing: enumField(SECURING, `Securing must be one of: ${SECURING.join(', ')}.`),
       last_inspected: inspectionDate(),

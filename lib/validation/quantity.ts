@@ -1,13 +1,24 @@
 import { z } from 'zod';
 import type { QuantityRule, UnitSystem } from '@/lib/domain';
-import { formatNumber, fromSI, toSI, unitLabel } from '@/lib/units';
+import { fromSI, toSI, unitLabel } from '@/lib/units';
 import { NOT_A_NUMBER, readNumberText } from '@/lib/units/number-text';
 import { storableText } from './text';
 
 
+/**
+ * A bound in plain grouped digits, four figures but never fewer than its whole part ("1,000,000,000 J", "32,808 ft",
+ * "0.000001 m"): a limit is read by a person, so no exponent form like "1.000e+9 J".
+ */
+export function formatLimit(value: number): string {
+  if (!Number.isFinite(value)) return String(value);
+  const abs = Math.abs(value);
+  if (abs < 1) return value.toLocaleString('en-GB', { maximumSignificantDigits: 4 });
+  return value.toLocaleString('en-GB', { maximumFractionDigits: Math.max(0, 3 - Math.floor(Math.log10(abs))) });
+}
+
 function limit(rule: QuantityRule, bound: number, units: UnitSystem): string {
-  if (!rule.quantity) return `${formatNumber(bound, 4)}${rule.unitless ?? ''}`;
-  return `${formatNumber(fromSI(rule.quantity, bound, units), 4)} ${unitLabel(rule.quantity, units)}`;
+  if (!rule.quantity) return `${formatLimit(bound)}${rule.unitless ?? ''}`;
+  return `${formatLimit(fromSI(rule.quantity, bound, units))} ${unitLabel(rule.quantity, units)}`;
 }
 
 

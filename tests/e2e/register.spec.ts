@@ -1,4 +1,5 @@
 import { readFile } from 'node:fs/promises';
+import Papa from 'papaparse';
 import { expect, test } from './fixtures';
 import { computeItem } from '@/lib/register/compute';
 import { itemsTemplateCsv } from '@/lib/register/csv-write';
@@ -64,6 +65,11 @@ test('a site, a level, an item from the calculator, a CSV import with a bad row,
   await expect(problems).toContainText(String(badLine));
   await expect(problems).toContainText('mass_kg');
   await expect(page.getByRole('button', { name: /^Import all/ })).toBeDisabled();
+  // Each control says what it does: checking writes nothing, one button skips the bad rows, the other is all or none.
+  await expect(page.getByTestId('import-steps')).toContainText('Choosing a file only checks it');
+  await expect(page.getByRole('button', { name: 'Import the 4 valid rows' })).toHaveAccessibleDescription('Import the 4 valid rows writes 4 valid rows and skips 1 row with problems.');
+  await expect(page.getByRole('button', { name: /^Import all/ })).toHaveAccessibleDescription(/writes every row or none, so it is unavailable while 1 row has problems\./);
+  await expect(page.getByText(/lands whole/)).toHaveCount(0);
   await screens(page, 'register-import-check');
   await page.getByRole('button', { name: 'Import the 4 valid rows' }).click();
   await expect(page.getByText(/Imported 4 items into Test Quay warehouse/)).toBeVisible();
@@ -91,6 +97,27 @@ test('a site, a level, an item from the calculator, a CSV import with a bad row,
   expect(lines[0]).toContain('effective_energy_j');
   expect(lines).toHaveLength(1 + 5);
   expect(csv).toContain('TQ-001');
+  // TQ-001 came from the calculator at its own 30 m; the imported rows use Deck 2's 18 m, typed above.
+  const [header, ...cells] = Papa.parse<string[]>(csv, { skipEmptyLines: true }).data;
+  const byTag = (tag: string, column: string) => cells.find((c) => c[0] === tag)![header.indexOf(column)];
+  expect([byTag('TQ-001', 'drop_height_m'), byTag('TQ-001', 'height_from'), byTag('TQ-001', 'height_m')]).toEqual(['30', 'item', '30']);
+  expect([byTag('P-004', 'drop_height_m'), byTag('P-004', 'height_from'), byTag('P-004', 'height_m')]).toEqual(['18', 'level', '']);
+
+  // The sites list at tablet width: every chip names its level in text (WCAG 2.1, 1.4.1 Use of Color), and the
+  // table fits its box, so no column header is cut off.
+  await page.setViewportSize({ width: 820, height: 1180 });
+  await page.goto('/sites');
+  const chips = page.getByTestId('level-chip');
+  await expect(chips.first()).toBeVisible();
+  const ladderNames = new RegExp(`^(${DEFAULT_LADDER.map((l) => l.name).join('|')}):\\s*\\d+$`);
+  for (const chip of await chips.all()) expect((await chip.innerText()).trim()).toMatch(ladderNames);
+  const sitesTable = page.getByRole('table');
+  const fits = await sitesTable.evaluate((t) => {
+    const box = t.parentElement!.getBoundingClientRect();
+    return [...t.querySelectorAll('th')].every((th) => th.getBoundingClientRect().right <= box.right + 0.5) && t.parentElement!.scrollWidth <= t.parentElement!.clientWidth;
+  });
+  expect(fits).toBe(true);
+  await screens(page, 'register-sites');
 });
 
 test('a viewer reads a register but gets no controls to change it', async ({ page, browser }) => {

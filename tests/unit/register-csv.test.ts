@@ -163,7 +163,7 @@ describe('header problems', () => {
   });
 
   it('accepts the columns an export adds, and ignores them', () => {
-    const text = csv(`${HEADER},site,fall_time_s,impact_speed_ft_s,impact_energy_j,effective_energy_ft_lbf,drift_m,consequence_level,computed_at,model_version,compute_error`, `${GOOD},Pier 4,2.5,80,900,660,0.4,High,,,`);
+    const text = csv(`${HEADER},site,drop_height_m,height_from,fall_time_s,impact_speed_ft_s,impact_energy_j,effective_energy_ft_lbf,drift_m,consequence_level,computed_at,model_version,compute_error`, `${GOOD},Pier 4,30,level,2.5,80,900,660,0.4,High,,,`);
     const r = parseItemsCsv(text, SITE);
     expect(r.problems).toEqual([]);
     expect(r.valid).toHaveLength(1);
@@ -357,7 +357,7 @@ describe('register export', () => {
 
   const rows = [
     row({ description: '=HYPERLINK("x")', notes: '@SUM(1)' }),
-    row({ id: 'r2', tag: '+1', description: '-2', shape: 'direct', dimensions_m: {}, cd: 1.1, area_m2: 0.02, volume_m3: 0.0004, height_override_m: 12.5, consequence_level_id: null, last_inspected: null, notes: 'two\nlines' }),
+    row({ id: 'r2', tag: '+1', description: '-2', shape: 'direct', dimensions_m: {}, cd: 1.1, area_m2: 0.02, volume_m3: 0.0004, height_m: 12.5, height_overridden: true, height_override_m: 12.5, consequence_level_id: null, last_inspected: null, notes: 'two\nlines' }),
     row({ id: 'r3', tag: 'P-3', description: 'Panel, aluminium', category: 'structural_part', quantity: 3, mass_kg: 6, shape: 'flat_plate', dimensions_m: { width: 1.2, height: 0.6, thickness: 0.003 }, securing: 'fixed_without_secondary', level_name: 'Mezzanine', compute_error: '=bad', fall_time_s: null }),
   ];
 
@@ -379,6 +379,18 @@ describe('register export', () => {
     expect(at(1, 'height_m')).toBe('');
     expect(at(3, 'fall_time_s')).toBe('');
     expect(at(1, 'impact_energy_j')).toBe('143.2');
+  });
+
+  it('states the height each result was computed at and whose height it is', () => {
+    const text = registerCsv(rows, { units: 'si', ladder, siteName: 'Pier 4' });
+    const cells = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { delimiter: ',', skipEmptyLines: true }).data;
+    const header = cells[0];
+    const at = (r: number, name: string) => cells[r][header.indexOf(name)];
+    expect([at(1, 'drop_height_m'), at(1, 'height_from'), at(1, 'height_m')]).toEqual(['30', 'level', '']);
+    expect([at(2, 'drop_height_m'), at(2, 'height_from'), at(2, 'height_m')]).toEqual(['12.5', 'item', '12.5']);
+    // 30 m is 98.4252 ft to six figures (NIST SP 811: 1 ft = 0.3048 m).
+    const us = Papa.parse<string[]>(registerCsv([rows[0]], { units: 'us', ladder, siteName: 'Pier 4' }).replace(/^\uFEFF/, ''), { skipEmptyLines: true }).data;
+    expect(us[1][us[0].indexOf('drop_height_ft')]).toBe('98.4252');
   });
 
   it('re-imports to the same inputs (SI)', () => {

@@ -31,37 +31,49 @@ export function ImportActions({ report, busy, onImport, onChooseAnother }: {
   onImport: (mode: Mode) => void;
   onChooseAnother: () => void;
 }) {
-  const noteId = useId();
+  const validNoteId = useId();
+  const allNoteId = useId();
   const valid = report.valid_rows;
+  const bad = report.invalid_rows;
   const clean = report.problems.length === 0 && report.total_rows > 0;
+  const validNote =
+    valid === 0
+      ? 'No row is valid yet, so there is nothing to import: fix the problems below and choose the file again.'
+      : `${validButton(valid)} writes ${plural(valid, 'valid row')}${bad > 0 ? ` and skips ${plural(bad, 'row')} with problems` : ''}.`;
+  const allNote = clean
+    ? `${allButton(report.total_rows)} writes every row in one go, or none if the write fails.`
+    : `${allButton(report.total_rows)} writes every row or none, so it is unavailable while ${plural(bad, 'row')} ${bad === 1 ? 'has' : 'have'} problems.`;
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-center gap-3">
-        <button type="button" disabled={busy !== null || valid === 0} onClick={() => onImport('valid-only')} className={buttonStyles.primary}>
-          {busy === 'valid-only' ? 'Importing…' : `Import the ${valid} valid ${valid === 1 ? 'row' : 'rows'}`}
+        <button type="button" disabled={busy !== null || valid === 0} aria-describedby={validNoteId} onClick={() => onImport('valid-only')} className={buttonStyles.primary}>
+          {busy === 'valid-only' ? 'Importing…' : validButton(valid)}
         </button>
         <button
           type="button"
           disabled={busy !== null || !clean}
-          aria-describedby={clean ? undefined : noteId}
+          aria-describedby={allNoteId}
           onClick={() => onImport('all-or-nothing')}
           className={buttonStyles.quiet}
         >
-          {busy === 'all-or-nothing' ? 'Importing…' : `Import all ${report.total_rows} ${report.total_rows === 1 ? 'row' : 'rows'}`}
+          {busy === 'all-or-nothing' ? 'Importing…' : allButton(report.total_rows)}
         </button>
         <button type="button" disabled={busy !== null} onClick={onChooseAnother} className={buttonStyles.quiet}>
           Choose another file
         </button>
       </div>
-      {clean ? (
-        <p className="text-xs text-ink-muted">Every row is valid: either button imports the whole file in one go.</p>
-      ) : (
-        <p id={noteId} className="text-xs text-ink-muted">
-          {valid === 0
-            ? 'No row is valid yet, so there is nothing to import: fix the problems below and choose the file again.'
-            : `Importing all rows writes every row or none. With ${plural(report.invalid_rows, 'row')} with problems nothing would be written, so that button is disabled; importing the valid rows leaves the rows with problems out.`}
-        </p>
-      )}
+      <ul className="flex flex-col gap-1 text-xs text-ink-muted" data-testid="import-button-notes">
+        <li id={validNoteId}>{validNote}</li>
+        <li id={allNoteId}>{allNote}</li>
+      </ul>
     </div>
   );
+}
+
+function validButton(valid: number): string {
+  return `Import the ${valid} valid ${valid === 1 ? 'row' : 'rows'}`;
+}
+
+function allButton(total: number): string {
+  return `Import all ${total} ${total === 1 ? 'row' : 'rows'}`;
 }

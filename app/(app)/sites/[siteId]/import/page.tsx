@@ -23,10 +23,17 @@ export default async function ImportPage({ params }: { params: Promise<{ siteId:
           ← {site.name}
         </Link>
         <h1 className="text-2xl font-bold tracking-tight">Add items to {site.name} from a file</h1>
-        <p className="max-w-3xl text-sm text-ink-muted">
-          Plumbline checks every row first and writes nothing until you choose to import. The import is one step: it
-          lands whole or not at all.
-        </p>
+        <ul className="max-w-3xl list-disc pl-5 text-sm text-ink-muted" data-testid="import-steps">
+          <li>Choosing a file only checks it: every row is read and nothing is written.</li>
+          <li>
+            <strong className="font-semibold text-ink-soft">Import the valid rows</strong> writes the rows without
+            problems and skips the rows with problems.
+          </li>
+          <li>
+            <strong className="font-semibold text-ink-soft">Import all rows</strong> writes every row or, if any row has
+            a problem, none; it is offered only when every row is valid.
+          </li>
+        </ul>
       </header>
       <ImportPanel siteId={site.id} siteName={site.name} units={member.unitSystem} levelNames={levels.map((l) => l.name)} />
     </div>
