@@ -90,12 +90,13 @@ export const DEFAULT_VALUES: CalculatorValues = {
 /**
  * The same starting case in round US customary values rather than the SI numbers converted (0.98 ft) or relabelled
  * (0.3 ft, 10 °F water). Only the unit-bearing fields differ; zeros and blanks read the same in both systems.
+ * The box is sized so it sinks in water (10 lb in 0.125 ft³ is about 1,280 kg/m³), so every path shows a fall.
  */
 const US_DEFAULTS: Partial<CalculatorValues> = {
   units: 'us',
   length: '1',
-  width: '0.75',
-  height: '0.5',
+  width: '0.5',
+  height: '0.25',
   mass: '10',
   waterTemp: '50',
   dropHeight: '100',

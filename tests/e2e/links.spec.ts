@@ -25,6 +25,11 @@ test('a link with bad values opens with the defaults and names what it ignored',
 
 test('US customary opens with its own round defaults, and fresh water is usable at once', async ({ page }) => {
   await signUpFresh(page, 'links-us');
+  // Switching an untouched SI form gives the US defaults, not 98.4252 ft.
+  await page.goto('/calculator?units=si');
+  await formsReady(page);
+  await page.getByRole('radio', { name: 'US customary' }).click();
+  await expect(page.getByLabel('Drop height')).toHaveValue('100');
   await page.goto('/calculator?units=us');
   await formsReady(page);
   await expect(page.getByRole('textbox', { name: /^Mass \(/ })).toHaveValue('10');

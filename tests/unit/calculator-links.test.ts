@@ -71,6 +71,10 @@ describe('defaults in each unit system', () => {
     expect(toSI('temperature', 50, 'us')).toBeCloseTo(10, 9);
     expect(toSI('length', 100, 'us')).toBeCloseTo(30.48, 9);
     expect(defaultValues('si')).toEqual(DEFAULT_VALUES);
+    // 10 lb = 4.5359237 kg and 1 × 0.5 × 0.25 ft = 0.125 ft³ = 3.5396e-3 m³ (NIST SP 811): 1,281 kg/m³, denser
+    // than fresh water's 999.7 kg/m³ at 10 °C (CRC Handbook), so the default box sinks rather than floats.
+    const density = toSI('mass', Number(us.mass), 'us') / (Number(us.length) * Number(us.width) * Number(us.height) * 0.3048 ** 3);
+    expect(density).toBeCloseTo(1281.5, 0);
   });
 
   it('leave a US link short: only what differs from the US defaults', () => {
