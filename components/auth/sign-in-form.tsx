@@ -6,7 +6,8 @@ import { signInSchema } from '@/lib/validation/user';
 import { FormMessage, SubmitButton, TextField } from '@/components/forms/fields';
 import { useActionForm } from '@/components/forms/use-action-form';
 
-export function SignInForm() {
+/** `next` is the page to return to, already checked to be a path of this app; the action checks it again. */
+export function SignInForm({ next }: { next: string }) {
   const { form, state, pending, formAction, onSubmit, errorFor, ready } = useActionForm(signInSchema, signInAction, {
     email: '',
     password: '',
@@ -14,6 +15,7 @@ export function SignInForm() {
   return (
     <form action={formAction} onSubmit={onSubmit} noValidate data-ready={ready || undefined} className="flex flex-col gap-4">
       <FormMessage ok={state.ok} message={state.message} />
+      {next !== '/' ? <input type="hidden" name="next" value={next} /> : null}
       <TextField label="E-mail" type="email" autoComplete="username" error={errorFor('email')} {...form.register('email')} />
       <TextField
         label="Password"

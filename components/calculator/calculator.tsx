@@ -10,7 +10,7 @@ import { setUnitSystemAction } from '@/lib/actions/profile';
 import { toDropCase } from '@/lib/calculator/drop-case';
 import { calculatorSchema } from '@/lib/calculator/schema';
 import { convertUnits, toSearchParams } from '@/lib/calculator/url-state';
-import type { CalculatorValues } from '@/lib/calculator/values';
+import { defaultValues, type CalculatorValues } from '@/lib/calculator/values';
 import type { DropCase } from '@/lib/physics';
 import { formatQuantity } from '@/lib/units';
 import { DropResults } from './drop-results';
@@ -59,20 +59,32 @@ function CalculatorBody({ initial, canRegister }: { initial: CalculatorValues; c
     window.history.replaceState(null, '', query ? `?${query}` : window.location.pathname);
   }, [valuesKey]);
 
-  const dropCase = useMemo(() => {
+  // The schema's messages name their field, so the note above the results can say what to fix even when the
+  // field's own message is not on screen (a field the last change brought into play, or one further down).
+  const { dropCase, problems } = useMemo(() => {
     const v = JSON.parse(valuesKey) as CalculatorValues;
-    if (!calculatorSchema.safeParse(v).success) return null;
+    const parsed = calculatorSchema.safeParse(v);
+    if (!parsed.success) return { dropCase: null, problems: [...new Set(parsed.error.issues.map((i) => i.message))] };
     try {
-      return toDropCase(v, PLOT_SAMPLES);
+      return { dropCase: toDropCase(v, PLOT_SAMPLES), problems: [] };
     } catch {
-      return null;
+      return { dropCase: null, problems: [] };
     }
   }, [valuesKey]);
+
+  // A change can bring a field into play whose value is already wrong; mark every such field, not just the one typed in.
+  const invalid = problems.length > 0;
+  useEffect(() => {
+    if (invalid) void form.trigger();
+  }, [form, invalid, valuesKey]);
   const caseJson = dropCase ? JSON.stringify(dropCase) : null;
   const query = useDropResult(caseJson);
 
   const switchUnits = (to: UnitSystem) => {
-    form.reset(convertUnits(form.getValues(), to));
+    const current = form.getValues();
+    // An untouched form opens the other system's own round defaults rather than converted figures (0.984252 ft).
+    const untouched = toSearchParams(current).toString() === `units=${current.units}`;
+    form.reset(untouched ? defaultValues(to) : convertUnits(current, to));
     void form.trigger();
     startTransition(async () => {
       await setUnitSystemAction(to);
@@ -101,9 +113,16 @@ function CalculatorBody({ initial, canRegister }: { initial: CalculatorValues; c
 
       <div className="flex min-w-0 flex-col gap-4" aria-live="polite">
         {!dropCase ? (
-          <p role="status" className="rounded-card bg-paper-raised p-5 text-ink-soft shadow-card">
-            Fix the fields marked in the form to see results: Plumbline shows no figures for a case it cannot read.
-          </p>
+          <div role="status" data-testid="form-problems" className="rounded-card bg-paper-raised p-5 text-ink-soft shadow-card">
+            <p>Fix the fields marked in the form to see results: Plumbline shows no figures for a case it cannot read.</p>
+            {problems.length ? (
+              <ul className="mt-2 list-disc pl-5 text-sm">
+                {problems.map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
+              </ul>
+            ) : null}
+          </div>
         ) : query.error ? (
           <div role="alert" className="rounded-card border-l-4 border-flare-500 bg-flare-50 p-4 text-sm text-flare-700">
             <p className="font-semibold">{query.error.message}</p>

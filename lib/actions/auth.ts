@@ -5,6 +5,7 @@ import { createOrganisationWithAdmin } from '@/db/organisations';
 import { findUserByEmail } from '@/db/users';
 import { ConflictError } from '@/lib/errors';
 import { authenticate, endSession, hashPassword, startSession } from '@/lib/auth';
+import { safeReturnPath } from '@/lib/http/return-path';
 import { signInSchema, signUpSchema } from '@/lib/validation/user';
 import { defineAction } from './define';
 
@@ -12,12 +13,13 @@ import { defineAction } from './define';
 export const signInAction = defineAction({
   allow: 'public',
   schema: signInSchema,
-  run: async ({ email, password }) => {
+  run: async ({ email, password }, { fields }) => {
     // A full hashing pool throws UnavailableError: the form says so and when to try again, as the route's 503 does.
     const outcome = await authenticate(email, password);
     if (!outcome.ok) return { message: outcome.message };
     await startSession(outcome.member.userId, outcome.member.organisationId);
-    return { redirect: outcome.member.mustChangePassword ? '/profile?welcome=1' : '/' };
+    // A first sign-in changes the password before anything else; otherwise back to the page asked for, if it is ours.
+    return { redirect: outcome.member.mustChangePassword ? '/profile?welcome=1' : safeReturnPath(fields.next) };
   },
 });
 

@@ -50,6 +50,7 @@ export interface CalculatorValues {
   model: ModelChoice;
 }
 
+/** The SI form a new calculation opens with: round metric values for a hand-sized box dropped from a scaffold. */
 export const DEFAULT_VALUES: CalculatorValues = {
   units: 'si',
   shape: 'tumbling_box',
@@ -85,3 +86,24 @@ export const DEFAULT_VALUES: CalculatorValues = {
   releaseAngle: '0',
   model: 'auto',
 };
+
+/**
+ * The same starting case in round US customary values rather than the SI numbers converted (0.98 ft) or relabelled
+ * (0.3 ft, 10 °F water). Only the unit-bearing fields differ; zeros and blanks read the same in both systems.
+ * The box is sized so it sinks in water (10 lb in 0.125 ft³ is about 1,280 kg/m³), so every path shows a fall.
+ */
+const US_DEFAULTS: Partial<CalculatorValues> = {
+  units: 'us',
+  length: '1',
+  width: '0.5',
+  height: '0.25',
+  mass: '10',
+  waterTemp: '50',
+  dropHeight: '100',
+  airGap: '80',
+  waterDepth: '250',
+};
+
+export function defaultValues(units: UnitSystem): CalculatorValues {
+  return units === 'us' ? { ...DEFAULT_VALUES, ...US_DEFAULTS } : DEFAULT_VALUES;
+}

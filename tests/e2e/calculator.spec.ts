@@ -60,9 +60,11 @@ test('a steel box dropped 30 m in a 10 m/s wind, in SI and US units, shared by l
 
   await page.getByLabel('Mass known').check();
   await page.getByRole('textbox', { name: /^Mass \(/ }).fill('-3');
-  await expect(page.getByText('Mass must be greater than 0 kg.')).toBeVisible();
+  // The message shows under the field and again, by name, in the note where the results would be.
+  await expect(page.getByRole('form', { name: 'Drop case' }).getByText('Mass must be greater than 0 kg.')).toBeVisible();
   await expect(page.getByTestId('fall-time')).toHaveCount(0);
   await expect(page.getByText('Fix the fields marked in the form')).toBeVisible();
+  await expect(page.getByTestId('form-problems')).toContainText('Mass must be greater than 0 kg.');
   await screens(page, 'calculator-bad-mass');
 });
 

@@ -63,6 +63,18 @@ describe('sign-in and sign-out', () => {
     expect((await me.json()).role).toBe('engineer');
   });
 
+  it('returns to the page asked for, and only to a path of this app', async () => {
+    const org = await createOrg('Ness', 'ness');
+    const email = org.users.engineer.email;
+    const back = await runAction(signInAction, { email, password: PASSWORD, next: '/calculator?shape=sphere&mass=3' });
+    expect(back).toEqual({ kind: 'redirect', to: '/calculator?shape=sphere&mass=3' });
+    // Open-redirect forms from the OWASP Unvalidated Redirects and Forwards Cheat Sheet all land on the overview.
+    for (const next of ['//evil.example', '/\\evil.example', 'https://x', 'javascript:alert(1)']) {
+      signOutLocally();
+      expect(await runAction(signInAction, { email, password: PASSWORD, next })).toEqual({ kind: 'redirect', to: '/' });
+    }
+  });
+
   it('answers a wrong password and an unknown e-mail with the same message', async () => {
     const org = await createOrg('Ness', 'ness');
     const wrong = await runAction(signInAction, { email: org.users.admin.email, password: 'not-the-password' });

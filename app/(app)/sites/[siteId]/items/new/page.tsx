@@ -28,7 +28,7 @@ export default async function NewItemPage({
   const fromCalculator = query.from === 'calculator';
   const calcUnits = query.units === 'us' || query.units === 'si' ? query.units : member.unitSystem;
   const units = fromCalculator ? calcUnits : member.unitSystem;
-  const initial = fromCalculator ? itemValuesFromCalculator(fromSearchParams(query, units)) : itemValues(null, units);
+  const initial = fromCalculator ? itemValuesFromCalculator(fromSearchParams(query, units).values) : itemValues(null, units);
   if (levels.length === 1) initial.level_id = levels[0].id;
 
   return (
