@@ -35,9 +35,9 @@ describe('status codes of pages', () => {
     }
   });
 
-  it('a page of the app without a session still redirects to sign-in', async () => {
+  it('a page of the app without a session still redirects to sign-in, which returns to the page afterwards', async () => {
     const res = await get('/members', '');
     expect(res.status).toBe(307);
-    expect(res.headers.get('location')).toMatch(/\/sign-in$/);
+    expect(res.headers.get('location')).toMatch(/\/sign-in\?next=%2Fmembers$/);
   });
 });
